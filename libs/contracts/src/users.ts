@@ -1,0 +1,52 @@
+import { z } from 'zod';
+import { emailSchema } from './auth';
+import { roleSchema } from './roles';
+
+export const organisationKindSchema = z.enum(['lab', 'customer']);
+export type OrganisationKind = z.infer<typeof organisationKindSchema>;
+
+export const organisationSchema = z.object({
+  id: z.uuid(),
+  name: z.string(),
+  kind: organisationKindSchema,
+});
+export type Organisation = z.infer<typeof organisationSchema>;
+
+export const userSummarySchema = z.object({
+  id: z.uuid(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  organisationId: z.uuid(),
+  organisationName: z.string(),
+  active: z.boolean(),
+  /** Whether the user has accepted an invitation and set a password. */
+  activated: z.boolean(),
+  createdAt: z.iso.datetime(),
+});
+export type UserSummary = z.infer<typeof userSummarySchema>;
+
+/** POST /api/invitations (lab manager). Staff roles must be in the lab organisation, customers in a customer organisation. */
+export const createInvitationSchema = z.object({
+  email: emailSchema,
+  name: z.string().trim().min(1, { message: 'Enter a name' }).max(120),
+  role: roleSchema,
+  organisationId: z.uuid({ message: 'Choose an organisation' }),
+});
+export type CreateInvitationRequest = z.infer<typeof createInvitationSchema>;
+
+/** PATCH /api/users/:id (lab manager). */
+export const updateUserSchema = z
+  .object({
+    role: roleSchema.optional(),
+    active: z.boolean().optional(),
+    name: z.string().trim().min(1).max(120).optional(),
+  })
+  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+export type UpdateUserRequest = z.infer<typeof updateUserSchema>;
+
+/** PATCH /api/me — a user's own profile. */
+export const updateProfileSchema = z.object({
+  name: z.string().trim().min(1, { message: 'Enter a name' }).max(120),
+});
+export type UpdateProfileRequest = z.infer<typeof updateProfileSchema>;
