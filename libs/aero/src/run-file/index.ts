@@ -1,1 +1,5 @@
-export {};
+export * from './channel-id';
+export * from './run-sample';
+export * from './run-file-header';
+export * from './run-file-error';
+export * from './read-run-file-options';

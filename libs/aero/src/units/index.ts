@@ -1,1 +1,2 @@
 export * from './nist-constants';
+export * from './unit-table';
