@@ -3,3 +3,4 @@ export * from './run-sample';
 export * from './run-file-header';
 export * from './run-file-error';
 export * from './read-run-file-options';
+export * from './read-run-file';

@@ -2,7 +2,10 @@ import type { RunFileHeader } from './run-file-header';
 import type { RunSample } from './run-sample';
 
 /** What `readRunFile` accepts as input: chunks of bytes or text, e.g. `fs.createReadStream(path)`. */
-export type RunFileInput = AsyncIterable<Buffer | Uint8Array | string> | NodeJS.ReadableStream;
+export type RunFileInput =
+  | AsyncIterable<Buffer | Uint8Array | string>
+  | Iterable<Buffer | Uint8Array>
+  | NodeJS.ReadableStream;
 
 /** Options of `readRunFile`. */
 export interface ReadRunFileOptions {
