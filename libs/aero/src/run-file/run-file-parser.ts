@@ -291,6 +291,8 @@ export class RunFileParser {
     const values = this.values;
     const delimiter = this.delimiter;
     const isExtra = this.isExtra;
+    const offset = this.offset;
+    const scale = this.scale;
     for (let c = 0; c < n; c++) {
       while (p < end && ((b = buf[p]) === SPACE || b === TAB)) p++;
       const cellStart = p;
@@ -346,7 +348,7 @@ export class RunFileParser {
           if (negative) value = -value;
         }
         while (p < end && ((b = buf[p]) === SPACE || b === TAB || b === CR)) p++;
-        values[c] = (value + this.offset[c]) * this.scale[c];
+        values[c] = (value + offset[c]) * scale[c];
       }
       if (p < end) {
         if (buf[p] !== delimiter) {
@@ -364,9 +366,11 @@ export class RunFileParser {
       }
     }
     const line = this.lineCount;
+    const minimum = this.minimum;
+    const maximum = this.maximum;
     for (let c = 0; c < n; c++) {
       const value = values[c];
-      if (!(value >= this.minimum[c] && value <= this.maximum[c])) {
+      if (!(value >= minimum[c] && value <= maximum[c])) {
         this.outOfRange(buf, lineStart, end, c);
         return;
       }
