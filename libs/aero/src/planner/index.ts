@@ -1,1 +1,11 @@
-export {};
+export * from './planner-caution';
+export * from './planner-part';
+export * from './build-up-result';
+export * from './fit-check';
+export * from './fit-thresholds';
+export * from './blockage-check';
+export * from './load-check';
+export * from './speed-limit-check';
+export * from './reynolds-check';
+export * from './estimate-duration';
+export * from './compare-with-measured';

@@ -1,0 +1,62 @@
+import type { FitCheck } from './fit-check';
+import { BLOCKAGE_FAIL_RATIO, BLOCKAGE_WARN_RATIO } from './fit-thresholds';
+
+/** Inputs of {@link blockageCheck}. */
+export interface BlockageInput {
+  /** Projected frontal area of the model, m². */
+  modelFrontalArea: number;
+  /** Test-section cross-section area, m². */
+  sectionArea: number;
+  /** Labels of parts whose frontal area is unknown and so not counted. */
+  uncountedParts?: readonly string[];
+}
+
+const percent = (ratio: number): string => `${(ratio * 100).toFixed(2)} %`;
+
+/**
+ * Blockage check: model frontal area divided by test-section area, against the rules of thumb of 7.5 % and 10 %.
+ * Passes below 7.5 %; warns from 7.5 % inclusive up to 10 % inclusive; fails above 10 %. Also warns (at least) when
+ * some parts' frontal areas are unknown.
+ *
+ * Source: thresholds from J. B. Barlow, W. H. Rae, A. Pope, *Low-Speed Wind Tunnel Testing*, 3rd ed., 1999
+ * (attribution from memory); the ratio is a definition.
+ *
+ * @param input model frontal area (m²), section area (m²), parts not counted
+ * @returns check `blockage`, value = ratio (dimensionless)
+ * @throws {RangeError} when the section area is not finite and positive or the model area is negative or not finite
+ * @example blockageCheck({ modelFrontalArea: 0.05, sectionArea: 1 }).status // 'pass'
+ */
+export function blockageCheck(input: BlockageInput): FitCheck {
+  const { modelFrontalArea, sectionArea } = input;
+  if (!Number.isFinite(sectionArea) || sectionArea <= 0) {
+    throw new RangeError(`blockageCheck requires a finite, positive sectionArea (got ${sectionArea})`);
+  }
+  if (!Number.isFinite(modelFrontalArea) || modelFrontalArea < 0) {
+    throw new RangeError(`blockageCheck requires a finite, non-negative modelFrontalArea (got ${modelFrontalArea})`);
+  }
+  const ratio = modelFrontalArea / sectionArea;
+  const uncounted = input.uncountedParts ?? [];
+  const missing = uncounted.length > 0 ? ` Frontal area unknown and not counted for: ${uncounted.join(', ')}.` : '';
+  if (ratio > BLOCKAGE_FAIL_RATIO) {
+    return {
+      id: 'blockage',
+      status: 'fail',
+      value: ratio,
+      reason: `Blockage ${percent(ratio)} is above ${percent(BLOCKAGE_FAIL_RATIO)}: corrections become large and uncertain; use a smaller scale or a larger section.${missing}`,
+    };
+  }
+  if (ratio >= BLOCKAGE_WARN_RATIO) {
+    return {
+      id: 'blockage',
+      status: 'warn',
+      value: ratio,
+      reason: `Blockage ${percent(ratio)} is at or above ${percent(BLOCKAGE_WARN_RATIO)} (limit ${percent(BLOCKAGE_FAIL_RATIO)}): blockage corrections will be significant.${missing}`,
+    };
+  }
+  return {
+    id: 'blockage',
+    status: uncounted.length > 0 ? 'warn' : 'pass',
+    value: ratio,
+    reason: `Blockage ${percent(ratio)} is below ${percent(BLOCKAGE_WARN_RATIO)}.${missing}`,
+  };
+}
