@@ -3,6 +3,7 @@
  * Each folder has its own barrel; this file only gathers them.
  */
 export * from './units';
+export * from './errors';
 export * from './air';
 export * from './flow';
 export * from './corrections';

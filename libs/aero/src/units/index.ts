@@ -1,2 +1,3 @@
 export * from './nist-constants';
 export * from './unit-table';
+export * from './angles';
