@@ -1,0 +1,89 @@
+import { DatePipe, JsonPipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatPaginatorModule, PageEvent } from '@angular/material/paginator';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSelectModule } from '@angular/material/select';
+import { MatTableModule } from '@angular/material/table';
+import type { AuditEntry } from '@tunnelwright/contracts';
+import { problemMessage } from '../../core/problem-message';
+import { EmptyState } from '../../shared/empty-state';
+import { ErrorBanner } from '../../shared/error-banner';
+import { AuditApi, AuditQuery } from './audit-api';
+
+/** The audit trail of who changed what, paged on the server, with the change itself on demand. */
+@Component({
+  selector: 'tw-audit-page',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [
+    DatePipe,
+    JsonPipe,
+    MatTableModule,
+    MatPaginatorModule,
+    MatProgressBarModule,
+    MatFormFieldModule,
+    MatSelectModule,
+    MatButtonModule,
+    EmptyState,
+    ErrorBanner,
+  ],
+  templateUrl: './audit-page.html',
+  styles: `
+    table {
+      width: 100%;
+    }
+    .filter {
+      width: 220px;
+    }
+    .when {
+      white-space: nowrap;
+    }
+    .change {
+      display: grid;
+      grid-template-columns: 1fr 1fr;
+      gap: 12px;
+      padding: 8px 0 16px;
+      pre {
+        margin: 4px 0 0;
+        padding: 8px;
+        max-height: 240px;
+        overflow: auto;
+        background: var(--mat-sys-surface-container);
+        border-radius: var(--mat-sys-corner-small);
+        font-size: 12px;
+      }
+    }
+    .detail-row {
+      height: 0;
+    }
+  `,
+})
+export class AuditPage {
+  private readonly api = inject(AuditApi);
+
+  protected readonly columns = ['createdAt', 'actor', 'action', 'entity', 'details'];
+  protected readonly entities = ['', 'user', 'invitation', 'tunnel', 'service'];
+  protected readonly query = signal<AuditQuery>({ entity: '', page: 1, pageSize: 25 });
+  protected readonly entries = rxResource({ params: () => this.query(), stream: ({ params }) => this.api.list(params) });
+  protected readonly rows = computed(() => (this.entries.hasValue() ? this.entries.value().items : []));
+  protected readonly total = computed(() => (this.entries.hasValue() ? this.entries.value().total : 0));
+  protected readonly loadError = computed(() => {
+    const error = this.entries.error();
+    return error ? problemMessage(error.cause ?? error, 'The audit log could not be loaded.') : null;
+  });
+  protected readonly expandedId = signal<string | null>(null);
+
+  protected filterBy(entity: string): void {
+    this.query.update((current) => ({ ...current, entity, page: 1 }));
+  }
+
+  protected turnPage(event: PageEvent): void {
+    this.query.update((current) => ({ ...current, page: event.pageIndex + 1, pageSize: event.pageSize }));
+  }
+
+  protected toggle(entry: AuditEntry): void {
+    this.expandedId.update((current) => (current === entry.id ? null : entry.id));
+  }
+}

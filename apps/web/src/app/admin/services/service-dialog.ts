@@ -1,0 +1,104 @@
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { FormControl, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSelectModule } from '@angular/material/select';
+import type { Service, ServiceUnit, Tunnel } from '@tunnelwright/contracts';
+import { CatalogueApi } from '../../core/catalogue-api';
+import { problemFieldErrors, problemMessage } from '../../core/problem-message';
+import { ErrorBanner } from '../../shared/error-banner';
+import { fromMinorUnits, toMinorUnits } from '../../shared/money';
+import { numberErrorText } from '../../shared/number-error-text';
+import { serviceUnitLabels } from '../../shared/service-unit-labels';
+
+/** What the service dialog needs: the service being edited (or null) and the tunnels it may be tied to. */
+export interface ServiceDialogData {
+  readonly service: Service | null;
+  readonly tunnels: readonly Tunnel[];
+}
+
+/** Creates or edits a service. The rate is typed as a decimal amount and sent as integer minor units. */
+@Component({
+  selector: 'tw-service-dialog',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [
+    ReactiveFormsModule,
+    MatDialogModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    MatButtonModule,
+    MatProgressBarModule,
+    ErrorBanner,
+  ],
+  templateUrl: './service-dialog.html',
+  styles: `
+    .tw-form-grid {
+      padding-top: 8px;
+    }
+    .wide {
+      grid-column: 1 / -1;
+    }
+  `,
+})
+export class ServiceDialog {
+  private readonly api = inject(CatalogueApi);
+  private readonly dialogRef = inject<MatDialogRef<ServiceDialog, Service>>(MatDialogRef);
+  private readonly data = inject<ServiceDialogData>(MAT_DIALOG_DATA);
+
+  protected readonly service = this.data.service;
+  protected readonly tunnels = this.data.tunnels;
+  protected readonly units = Object.entries(serviceUnitLabels) as [ServiceUnit, string][];
+  protected readonly numberError = numberErrorText;
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    name: [this.service?.name ?? '', [Validators.required, Validators.maxLength(120)]],
+    description: [this.service?.description ?? '', Validators.maxLength(2000)],
+    unit: [this.service?.unit ?? ('hour' as ServiceUnit), Validators.required],
+    rate: new FormControl<number | null>(
+      this.service ? fromMinorUnits(this.service.rate, this.service.currency) : null,
+      [Validators.required, Validators.min(0)],
+    ),
+    currency: [this.service?.currency ?? 'EUR', [Validators.required, Validators.pattern(/^[A-Z]{3}$/)]],
+    tunnelId: new FormControl<string | null>(this.service?.tunnelId ?? null),
+  });
+  protected readonly busy = signal(false);
+  protected readonly error = signal<string | null>(null);
+
+  protected save(): void {
+    this.form.controls.currency.setValue(this.form.controls.currency.value.trim().toUpperCase());
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const value = this.form.getRawValue();
+    const input = {
+      name: value.name.trim(),
+      description: value.description.trim(),
+      unit: value.unit,
+      rate: toMinorUnits(value.rate ?? 0, value.currency),
+      currency: value.currency,
+      tunnelId: value.tunnelId,
+    };
+    this.busy.set(true);
+    this.error.set(null);
+    const request = this.service ? this.api.updateService(this.service.id, input) : this.api.createService(input);
+    request.subscribe({
+      next: (saved) => {
+        this.busy.set(false);
+        this.dialogRef.close(saved);
+      },
+      error: (error: unknown) => {
+        this.busy.set(false);
+        for (const field of problemFieldErrors(error)) {
+          const control = this.form.get(field.field);
+          control?.setErrors({ server: field.message });
+          control?.markAsTouched();
+        }
+        this.error.set(problemMessage(error, 'The service could not be saved.'));
+      },
+    });
+  }
+}

@@ -1,0 +1,112 @@
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { rxResource, toSignal } from '@angular/core/rxjs-interop';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSelectModule } from '@angular/material/select';
+import { roleLabels, staffRoles, type Role } from '@tunnelwright/contracts';
+import { problemFieldErrors, problemMessage } from '../../core/problem-message';
+import { ErrorBanner } from '../../shared/error-banner';
+import { UsersApi } from './users-api';
+
+/** Invites a person by e-mail; the role choices follow the kind of organisation chosen. Closes with the address. */
+@Component({
+  selector: 'tw-invite-dialog',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [
+    ReactiveFormsModule,
+    MatDialogModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    MatButtonModule,
+    MatProgressBarModule,
+    ErrorBanner,
+  ],
+  templateUrl: './invite-dialog.html',
+  styles: `
+    form {
+      display: flex;
+      flex-direction: column;
+      gap: 12px;
+      padding-top: 8px;
+    }
+  `,
+})
+export class InviteDialog {
+  private readonly api = inject(UsersApi);
+  private readonly dialogRef = inject<MatDialogRef<InviteDialog, string>>(MatDialogRef);
+
+  protected readonly roleLabels = roleLabels;
+  protected readonly organisations = rxResource({ stream: () => this.api.organisations() });
+  protected readonly organisationsError = computed(() => {
+    const error = this.organisations.error();
+    return error ? problemMessage(error.cause ?? error, 'The organisations could not be loaded.') : null;
+  });
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    email: ['', [Validators.required, Validators.email, Validators.maxLength(254)]],
+    name: ['', [Validators.required, Validators.maxLength(120)]],
+    organisationId: ['', Validators.required],
+    role: ['' as Role | '', Validators.required],
+  });
+  private readonly organisationId = toSignal(this.form.controls.organisationId.valueChanges, { initialValue: '' });
+  /** Staff roles for the laboratory itself, "customer" for a customer organisation. */
+  protected readonly roleChoices = computed<readonly Role[]>(() => {
+    const chosen = this.organisations.hasValue()
+      ? this.organisations.value().find((organisation) => organisation.id === this.organisationId())
+      : undefined;
+    if (!chosen) {
+      return [];
+    }
+    return chosen.kind === 'lab' ? staffRoles : ['customer'];
+  });
+  protected readonly busy = signal(false);
+  protected readonly error = signal<string | null>(null);
+
+  constructor() {
+    this.form.controls.organisationId.valueChanges.subscribe(() => {
+      const choices = this.roleChoices();
+      const role = this.form.controls.role.value;
+      // A customer organisation has only one possible role, so choose it; otherwise drop a role that no longer fits.
+      if (choices.length === 1) {
+        this.form.controls.role.setValue(choices[0]);
+      } else if (role && !choices.includes(role)) {
+        this.form.controls.role.setValue('');
+      }
+    });
+  }
+
+  protected send(): void {
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const { email, name, organisationId, role } = this.form.getRawValue();
+    if (!role) {
+      return;
+    }
+    this.busy.set(true);
+    this.error.set(null);
+    this.api.invite({ email: email.trim(), name: name.trim(), organisationId, role }).subscribe({
+      next: () => {
+        this.busy.set(false);
+        this.dialogRef.close(email.trim());
+      },
+      error: (error: unknown) => {
+        this.busy.set(false);
+        const fields = problemFieldErrors(error);
+        for (const field of fields) {
+          const control = this.form.get(field.field);
+          if (control) {
+            control.setErrors({ server: field.message });
+            control.markAsTouched();
+          }
+        }
+        this.error.set(problemMessage(error, 'The invitation could not be sent.'));
+      },
+    });
+  }
+}

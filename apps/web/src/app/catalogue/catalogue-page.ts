@@ -1,0 +1,71 @@
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
+import { DecimalPipe } from '@angular/common';
+import { MatCardModule } from '@angular/material/card';
+import { MatChipsModule } from '@angular/material/chips';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import type { Service, Tunnel } from '@tunnelwright/contracts';
+import { CatalogueApi } from '../core/catalogue-api';
+import { problemMessage } from '../core/problem-message';
+import { EmptyState } from '../shared/empty-state';
+import { ErrorBanner } from '../shared/error-banner';
+import { formatMoney } from '../shared/money';
+import { serviceUnitLabels } from '../shared/service-unit-labels';
+import { tunnelKindLabels } from '../shared/tunnel-kind-labels';
+
+/** Read-only list of the laboratory's tunnels and the services it offers, with rates. */
+@Component({
+  selector: 'tw-catalogue-page',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [DecimalPipe, MatCardModule, MatChipsModule, MatProgressBarModule, EmptyState, ErrorBanner],
+  templateUrl: './catalogue-page.html',
+  styleUrl: './catalogue-page.scss',
+})
+export class CataloguePage {
+  private readonly api = inject(CatalogueApi);
+
+  protected readonly tunnels = rxResource({ stream: () => this.api.tunnels() });
+  protected readonly services = rxResource({ stream: () => this.api.services() });
+
+  protected readonly kindLabels = tunnelKindLabels;
+  protected readonly activeTunnels = computed(() =>
+    this.tunnels.hasValue() ? this.tunnels.value().filter((tunnel) => !tunnel.archived) : [],
+  );
+  protected readonly activeServices = computed(() =>
+    this.services.hasValue() ? this.services.value().filter((service) => !service.archived) : [],
+  );
+  private readonly tunnelNames = computed(
+    () => new Map(this.activeTunnels().map((tunnel) => [tunnel.id, tunnel.name] as const)),
+  );
+  protected readonly tunnelsError = computed(() => {
+    const error = this.tunnels.error();
+    return error ? problemMessage(error.cause ?? error, 'The tunnels could not be loaded.') : null;
+  });
+  protected readonly servicesError = computed(() => {
+    const error = this.services.error();
+    return error ? problemMessage(error.cause ?? error, 'The services could not be loaded.') : null;
+  });
+
+  protected rate(service: Service): string {
+    return `${formatMoney(service.rate, service.currency)} ${serviceUnitLabels[service.unit]}`;
+  }
+
+  protected tunnelOf(service: Service): string {
+    return service.tunnelId ? (this.tunnelNames().get(service.tunnelId) ?? 'A specific tunnel') : 'Any tunnel';
+  }
+
+  protected capabilities(tunnel: Tunnel): string[] {
+    const flags: string[] = [];
+    const { yawRange, groundSimulation, turbulenceIntensity } = tunnel.capabilities;
+    if (yawRange !== undefined) {
+      flags.push(`Turntable, ${yawRange}° yaw range`);
+    }
+    if (groundSimulation) {
+      flags.push('Ground simulation');
+    }
+    if (turbulenceIntensity !== undefined) {
+      flags.push(`Turbulence intensity ${turbulenceIntensity} %`);
+    }
+    return flags;
+  }
+}

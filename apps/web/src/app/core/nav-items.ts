@@ -1,0 +1,36 @@
+import type { Role } from '@tunnelwright/contracts';
+
+/** One entry of the side navigation. */
+export interface NavItem {
+  readonly label: string;
+  readonly path: string;
+  /** Material icon ligature. */
+  readonly icon: string;
+  /** Whether the entry appears only while the API runs in demo mode. */
+  readonly demoOnly?: boolean;
+}
+
+const catalogue: NavItem = { label: 'Catalogue', path: '/catalogue', icon: 'view_list' };
+
+/** Which sections each role may open, in the order they are listed. */
+export const navItemsByRole: Readonly<Record<Role, readonly NavItem[]>> = {
+  customer: [catalogue],
+  technician: [catalogue],
+  analyst: [catalogue],
+  lab_manager: [
+    catalogue,
+    { label: 'Users', path: '/admin/users', icon: 'group' },
+    { label: 'Tunnels', path: '/admin/tunnels', icon: 'air' },
+    { label: 'Services', path: '/admin/services', icon: 'sell' },
+    { label: 'Audit log', path: '/admin/audit', icon: 'history' },
+    { label: 'Dev mailbox', path: '/dev-mailbox', icon: 'mail', demoOnly: true },
+  ],
+};
+
+/** The navigation for a role; demo-only entries appear only when demo mode is on. */
+export function navItemsFor(role: Role | null, demoMode: boolean): readonly NavItem[] {
+  if (role === null) {
+    return [];
+  }
+  return navItemsByRole[role].filter((item) => demoMode || !item.demoOnly);
+}
