@@ -1,0 +1,12 @@
+export { createKnex, knexConfig, defaultDatabaseUrl } from './knex';
+export { BaseModel } from './base-model';
+export { Organisation, type LabSettings } from './models/organisation';
+export { User } from './models/user';
+export { RefreshToken } from './models/refresh-token';
+export { UserToken, type UserTokenPurpose } from './models/user-token';
+export { Tunnel } from './models/tunnel';
+export { Service } from './models/service';
+export { AuditEntry } from './models/audit-entry';
+export { scopeToCaller, isStaff, type Caller } from './scope';
+export { recordAudit, type AuditRecord } from './audit';
+export { migrationConfig, migrationsDirectory } from './migrations';
