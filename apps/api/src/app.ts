@@ -28,10 +28,14 @@ export function createApp(deps: AppDeps): Express {
       customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
     }),
   );
+  const https = deps.config.publicUrl.startsWith('https:');
   app.use(
     helmet({
+      // Over plain http (local demo) HSTS and request upgrading would only break the page.
+      strictTransportSecurity: https,
       contentSecurityPolicy: {
         directives: {
+          'upgrade-insecure-requests': https ? [] : null,
           // Angular Material injects component styles at run time.
           'style-src': ["'self'", "'unsafe-inline'"],
           'img-src': ["'self'", 'data:'],

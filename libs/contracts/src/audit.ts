@@ -12,3 +12,12 @@ export const auditEntrySchema = z.object({
   createdAt: z.iso.datetime(),
 });
 export type AuditEntry = z.infer<typeof auditEntrySchema>;
+
+/** GET /api/audit query: filter by entity (and record), 1-based paging, newest first. */
+export const auditListQuerySchema = z.object({
+  entity: z.string().trim().max(60).optional(),
+  entityId: z.string().trim().max(60).optional(),
+  page: z.coerce.number().int().min(1, { message: 'Pages count from 1' }).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200, { message: 'At most 200 per page' }).default(50),
+});
+export type AuditListQuery = z.infer<typeof auditListQuerySchema>;

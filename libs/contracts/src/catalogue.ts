@@ -73,3 +73,12 @@ export const serviceSchema = serviceInputSchema.extend({
   updatedAt: z.iso.datetime(),
 });
 export type Service = z.infer<typeof serviceSchema>;
+
+/** GET /api/tunnels and /api/services query; archived records are listed for staff only. */
+export const catalogueListQuerySchema = z.object({
+  includeArchived: z
+    .enum(['true', 'false'], { message: 'includeArchived is true or false' })
+    .optional()
+    .transform((v) => v === 'true'),
+});
+export type CatalogueListQuery = z.infer<typeof catalogueListQuerySchema>;

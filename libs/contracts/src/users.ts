@@ -50,3 +50,23 @@ export const updateProfileSchema = z.object({
   name: z.string().trim().min(1, { message: 'Enter a name' }).max(120),
 });
 export type UpdateProfileRequest = z.infer<typeof updateProfileSchema>;
+
+/** Columns GET /api/users can sort by. */
+export const userSortSchema = z.enum(['name', 'email', 'role', 'createdAt']);
+export type UserSort = z.infer<typeof userSortSchema>;
+
+/** GET /api/users query: free-text search on name and e-mail, sorting and 1-based paging. */
+export const userListQuerySchema = z.object({
+  q: z.string().trim().max(120).optional(),
+  sort: userSortSchema.default('name'),
+  order: z.enum(['asc', 'desc']).default('asc'),
+  page: z.coerce.number({ message: 'Page must be a number' }).int().min(1, { message: 'Pages count from 1' }).default(1),
+  pageSize: z.coerce.number({ message: 'Page size must be a number' }).int().min(1).max(100, { message: 'At most 100 per page' }).default(20),
+});
+export type UserListQuery = z.infer<typeof userListQuerySchema>;
+
+/** POST /api/organisations (lab manager): a new customer organisation. */
+export const createOrganisationSchema = z.object({
+  name: z.string().trim().min(1, { message: 'Enter a name' }).max(200),
+});
+export type CreateOrganisationRequest = z.infer<typeof createOrganisationSchema>;

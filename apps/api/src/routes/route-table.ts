@@ -1,11 +1,31 @@
-import type { Resource, RouteDef } from './route';
+import { auditRoutes } from './audit';
+import { authRoutes } from './auth';
+import { devMailboxRoutes } from './dev-mailbox';
 import { healthRoutes } from './health';
+import { invitationRoutes } from './invitations';
+import { meRoutes } from './me';
+import { organisationRoutes } from './organisations';
+import type { Resource, RouteDef } from './route';
+import { serviceRoutes } from './services';
+import { tunnelRoutes } from './tunnels';
+import { userRoutes } from './users';
 
 /**
  * Every route of the API, declared once. `app.ts` mounts one Router per resource built from this table,
  * and the integration tests generate the role × route matrix from it, so a new route is covered at once.
  */
-export const resources: Resource[] = [{ mount: '/api/health', routes: healthRoutes }];
+export const resources: Resource[] = [
+  { mount: '/api/health', routes: healthRoutes },
+  { mount: '/api/auth', routes: authRoutes },
+  { mount: '/api/me', routes: meRoutes },
+  { mount: '/api/organisations', routes: organisationRoutes },
+  { mount: '/api/users', routes: userRoutes },
+  { mount: '/api/invitations', routes: invitationRoutes },
+  { mount: '/api/tunnels', routes: tunnelRoutes },
+  { mount: '/api/services', routes: serviceRoutes },
+  { mount: '/api/audit', routes: auditRoutes },
+  { mount: '/api/dev', routes: devMailboxRoutes },
+];
 
 /** One row per route with its full path, as the test matrix reads it. */
 export const routeTable: (RouteDef & { fullPath: string })[] = resources.flatMap((resource) =>

@@ -14,8 +14,8 @@ export interface SampleFixtures {
   tunnelId(): Promise<string>;
   /** A live service of the lab. */
   serviceId(): Promise<string>;
-  /** A fresh customer user of the first customer organisation. */
-  customerUserId(): Promise<string>;
+  /** A fresh, signed-up customer user of the first customer organisation (password: `password`). */
+  customerUser(): Promise<{ id: string; email: string }>;
   /** The first customer organisation (the one the matrix's own customer belongs to). */
   customerOrganisationId(): Promise<string>;
   /** A fresh, unused invitation token. */
