@@ -1,3 +1,4 @@
+import { requireNonNegative, requirePositive } from '../errors/require-number';
 import type { FitCheck } from './fit-check';
 import { BLOCKAGE_FAIL_RATIO, BLOCKAGE_WARN_RATIO } from './fit-thresholds';
 
@@ -23,17 +24,12 @@ const percent = (ratio: number): string => `${(ratio * 100).toFixed(2)} %`;
  *
  * @param input model frontal area (m²), section area (m²), parts not counted
  * @returns check `blockage`, value = ratio (dimensionless)
- * @throws {RangeError} when the section area is not finite and positive or the model area is negative or not finite
+ * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when the section area is not positive or the model area is negative
  * @example blockageCheck({ modelFrontalArea: 0.05, sectionArea: 1 }).status // 'pass'
  */
 export function blockageCheck(input: BlockageInput): FitCheck {
-  const { modelFrontalArea, sectionArea } = input;
-  if (!Number.isFinite(sectionArea) || sectionArea <= 0) {
-    throw new RangeError(`blockageCheck requires a finite, positive sectionArea (got ${sectionArea})`);
-  }
-  if (!Number.isFinite(modelFrontalArea) || modelFrontalArea < 0) {
-    throw new RangeError(`blockageCheck requires a finite, non-negative modelFrontalArea (got ${modelFrontalArea})`);
-  }
+  const sectionArea = requirePositive('blockageCheck', 'section area', input.sectionArea, 'm²');
+  const modelFrontalArea = requireNonNegative('blockageCheck', 'model frontal area', input.modelFrontalArea, 'm²');
   const ratio = modelFrontalArea / sectionArea;
   const uncounted = input.uncountedParts ?? [];
   const missing = uncounted.length > 0 ? ` Frontal area unknown and not counted for: ${uncounted.join(', ')}.` : '';

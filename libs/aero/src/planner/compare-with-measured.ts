@@ -1,3 +1,5 @@
+import { requireFinite, requirePositive } from '../errors/require-number';
+
 /**
  * Difference between a planner estimate and a measured drag area, in percent of the measured value:
  * (estimated − measured) / measured × 100. Positive when the planner over-estimates.
@@ -7,14 +9,11 @@
  * @param estimatedDragArea planner C_D·A, m²
  * @param measuredDragArea measured C_D·A, m²
  * @returns difference, %
- * @throws {RangeError} when either value is not finite, or the measured value is not positive
+ * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when either value is not finite, or the measured value is not positive
  * @example compareWithMeasured(0.33, 0.3) // 10
  */
 export function compareWithMeasured(estimatedDragArea: number, measuredDragArea: number): number {
-  if (!Number.isFinite(estimatedDragArea) || !Number.isFinite(measuredDragArea) || measuredDragArea <= 0) {
-    throw new RangeError(
-      `compareWithMeasured requires finite drag areas and a positive measured value (got ${estimatedDragArea}, ${measuredDragArea})`,
-    );
-  }
-  return ((estimatedDragArea - measuredDragArea) / measuredDragArea) * 100;
+  const estimated = requireFinite('compareWithMeasured', 'estimated drag area', estimatedDragArea, 'm²');
+  const measured = requirePositive('compareWithMeasured', 'measured drag area', measuredDragArea, 'm²');
+  return ((estimated - measured) / measured) * 100;
 }

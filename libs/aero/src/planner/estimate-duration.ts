@@ -1,3 +1,5 @@
+import { AeroInputError } from '../errors';
+import { requireNonNegative } from '../errors/require-number';
 import { PLANNER_CAUTION } from './planner-caution';
 
 /** Inputs of {@link estimateDuration}. */
@@ -30,7 +32,7 @@ export interface DurationEstimate {
  *
  * @param input counts, dwell in seconds, change and setup in minutes
  * @returns hours with the breakdown
- * @throws {RangeError} when a count is not a non-negative integer or a time is negative or not finite
+ * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when a count is not a non-negative integer or a time is negative
  * @example estimateDuration({ points: 120, dwellSeconds: 30, configurationChanges: 4, changeMinutes: 15, setupMinutes: 60 }).hours // 3
  */
 export function estimateDuration(input: DurationInput): DurationEstimate {
@@ -39,8 +41,9 @@ export function estimateDuration(input: DurationInput): DurationEstimate {
     ['points', points],
     ['configurationChanges', configurationChanges],
   ] as const) {
-    if (!Number.isInteger(value) || value < 0) {
-      throw new RangeError(`estimateDuration requires ${name} to be a non-negative integer (got ${value})`);
+    requireNonNegative('estimateDuration', name, value, '');
+    if (!Number.isInteger(value)) {
+      throw new AeroInputError('OUT_OF_RANGE', `\`estimateDuration\` requires a whole number of ${name}; got ${value}`);
     }
   }
   for (const [name, value] of [
@@ -48,9 +51,7 @@ export function estimateDuration(input: DurationInput): DurationEstimate {
     ['changeMinutes', changeMinutes],
     ['setupMinutes', setupMinutes],
   ] as const) {
-    if (!Number.isFinite(value) || value < 0) {
-      throw new RangeError(`estimateDuration requires ${name} to be finite and non-negative (got ${value})`);
-    }
+    requireNonNegative('estimateDuration', name, value, name === 'dwellSeconds' ? 's' : 'min');
   }
   const pointHours = (points * dwellSeconds) / 3600;
   const changeHours = (configurationChanges * changeMinutes) / 60;

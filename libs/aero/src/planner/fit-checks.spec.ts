@@ -39,7 +39,7 @@ describe('blockageCheck', () => {
   });
 
   it.each([0, Number.NaN, Number.POSITIVE_INFINITY])('rejects a section area of %f', (sectionArea) => {
-    expect(() => blockageCheck({ modelFrontalArea: 0.1, sectionArea })).toThrow(/blockageCheck requires/);
+    expect(() => blockageCheck({ modelFrontalArea: 0.1, sectionArea })).toThrow(/`blockageCheck` requires/);
   });
 });
 
@@ -68,7 +68,7 @@ describe('loadCheck', () => {
     [10, 0],
     [10, Number.POSITIVE_INFINITY],
   ])('rejects load %f against capacity %f', (load, capacity) => {
-    expect(() => loadCheck({ speed: 1, load, capacity, component: 'drag' })).toThrow(/loadCheck requires/);
+    expect(() => loadCheck({ speed: 1, load, capacity, component: 'drag' })).toThrow(/`loadCheck` requires/);
   });
 });
 
@@ -79,7 +79,7 @@ describe('speedLimitCheck', () => {
   });
 
   it.each([0, Number.NaN])('rejects a speed of %f', (speed) => {
-    expect(() => speedLimitCheck(speed, 50)).toThrow(/speedLimitCheck requires/);
+    expect(() => speedLimitCheck(speed, 50)).toThrow(/`speedLimitCheck` requires/);
   });
 });
 
@@ -107,6 +107,6 @@ describe('reynoldsCheck', () => {
   });
 
   it('rejects a non-positive Reynolds number', () => {
-    expect(() => reynoldsCheck({ ...base, edges: 'sharp', modelReynolds: 0, fullScaleReynolds: 1 })).toThrow(/reynoldsCheck requires/);
+    expect(() => reynoldsCheck({ ...base, edges: 'sharp', modelReynolds: 0, fullScaleReynolds: 1 })).toThrow(/`reynoldsCheck` requires/);
   });
 });

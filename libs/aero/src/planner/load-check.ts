@@ -1,3 +1,4 @@
+import { requireNonNegative, requirePositive } from '../errors/require-number';
 import type { FitCheck } from './fit-check';
 import { CAPACITY_FAIL_FRACTION, CAPACITY_WARN_FRACTION } from './fit-thresholds';
 
@@ -21,17 +22,13 @@ export interface LoadInput {
  *
  * @param input speed (m/s), load (N), capacity (N), component name
  * @returns check `load-<component>-<speed>`, value = load / capacity
- * @throws {RangeError} when the capacity is not finite and positive or the load is negative or not finite
+ * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when the capacity is not positive or the load is negative
  * @example loadCheck({ speed: 30, load: 50, capacity: 100, component: 'drag' }).status // 'pass'
  */
 export function loadCheck(input: LoadInput): FitCheck {
-  const { speed, load, capacity, component } = input;
-  if (!Number.isFinite(capacity) || capacity <= 0) {
-    throw new RangeError(`loadCheck requires a finite, positive capacity (got ${capacity})`);
-  }
-  if (!Number.isFinite(load) || load < 0) {
-    throw new RangeError(`loadCheck requires a finite, non-negative load (got ${load})`);
-  }
+  const { speed, component } = input;
+  const capacity = requirePositive('loadCheck', `${component} capacity`, input.capacity, 'N');
+  const load = requireNonNegative('loadCheck', `${component} load`, input.load, 'N');
   const fraction = load / capacity;
   const id = `load-${component}-${speed}`;
   const numbers = `${load.toPrecision(4)} N is ${(fraction * 100).toFixed(1)} % of the ${capacity.toPrecision(4)} N ${component} capacity at ${speed} m/s`;

@@ -1,3 +1,4 @@
+import { requirePositive } from '../errors/require-number';
 import type { FitCheck } from './fit-check';
 import { SHARP_EDGE_REYNOLDS } from './fit-thresholds';
 
@@ -23,7 +24,7 @@ export interface ReynoldsCheckInput {
  *
  * @param input part label, edge type, model and full-scale Reynolds numbers (dimensionless)
  * @returns check `reynolds-<index>`, value = model / full-scale Re when both are known
- * @throws {RangeError} when a given Reynolds number is not finite and positive
+ * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when a given Reynolds number is not finite and positive
  * @example reynoldsCheck({ index: 0, label: 'plate', edges: 'sharp', modelReynolds: 5e4, fullScaleReynolds: 1e6 }).status // 'pass'
  */
 export function reynoldsCheck(input: ReynoldsCheckInput): FitCheck {
@@ -36,11 +37,8 @@ export function reynoldsCheck(input: ReynoldsCheckInput): FitCheck {
       reason: `${label}: no characteristic length, so Reynolds-number similarity was not checked.`,
     };
   }
-  for (const value of [modelReynolds, fullScaleReynolds]) {
-    if (!Number.isFinite(value) || value <= 0) {
-      throw new RangeError(`reynoldsCheck requires finite, positive Reynolds numbers (got ${modelReynolds}, ${fullScaleReynolds})`);
-    }
-  }
+  requirePositive('reynoldsCheck', 'model Reynolds number', modelReynolds, '');
+  requirePositive('reynoldsCheck', 'full-scale Reynolds number', fullScaleReynolds, '');
   const ratio = modelReynolds / fullScaleReynolds;
   const numbers = `${label}: model Re ${modelReynolds.toExponential(2)} vs full scale ${fullScaleReynolds.toExponential(2)} (ratio ${ratio.toPrecision(3)})`;
   if (edges === 'sharp') {

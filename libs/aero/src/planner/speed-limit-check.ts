@@ -1,3 +1,4 @@
+import { requirePositive } from '../errors/require-number';
 import type { FitCheck } from './fit-check';
 
 /**
@@ -8,13 +9,12 @@ import type { FitCheck } from './fit-check';
  * @param speed planned speed, m/s
  * @param maxSpeed tunnel maximum speed, m/s
  * @returns check `speed-<speed>`, value = speed / maxSpeed
- * @throws {RangeError} when an input is not finite and positive
+ * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when an input is not finite and positive
  * @example speedLimitCheck(40, 50).status // 'pass'
  */
 export function speedLimitCheck(speed: number, maxSpeed: number): FitCheck {
-  if (!Number.isFinite(speed) || speed <= 0 || !Number.isFinite(maxSpeed) || maxSpeed <= 0) {
-    throw new RangeError(`speedLimitCheck requires a finite, positive speed and maxSpeed (got ${speed}, ${maxSpeed})`);
-  }
+  requirePositive('speedLimitCheck', 'planned speed', speed, 'm/s');
+  requirePositive('speedLimitCheck', 'maximum speed', maxSpeed, 'm/s');
   const id = `speed-${speed}`;
   if (speed > maxSpeed) {
     return { id, status: 'fail', value: speed / maxSpeed, reason: `${speed} m/s is above the tunnel maximum of ${maxSpeed} m/s.` };

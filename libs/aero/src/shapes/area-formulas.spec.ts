@@ -10,7 +10,7 @@ describe('circleArea', () => {
     expect(circleArea(0)).toBe(0);
   });
   it.each([Number.NaN, Number.POSITIVE_INFINITY, -0.1])('rejects %f', (d) => {
-    expect(() => circleArea(d)).toThrow(/circleArea requires/);
+    expect(() => circleArea(d)).toThrow(/`circleArea` requires/);
   });
 });
 
@@ -26,6 +26,6 @@ describe('rectangleArea', () => {
     [1, Number.NEGATIVE_INFINITY],
     [-1, 1],
   ])('rejects %f × %f', (a, b) => {
-    expect(() => rectangleArea(a, b)).toThrow(/rectangleArea requires/);
+    expect(() => rectangleArea(a, b)).toThrow(/`rectangleArea` requires/);
   });
 });

@@ -1,3 +1,5 @@
+import { requireNonNegative } from '../errors/require-number';
+
 /**
  * Circle area from its diameter: π times the diameter squared, divided by four.
  * The frontal area of a sphere, disk, cone base or body of revolution.
@@ -7,12 +9,10 @@
  *
  * @param diameter diameter, m
  * @returns area, m²
- * @throws {RangeError} when the diameter is negative or not finite
+ * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when the diameter is not finite or negative
  * @example circleArea(2) // 3.14159…
  */
 export function circleArea(diameter: number): number {
-  if (!Number.isFinite(diameter) || diameter < 0) {
-    throw new RangeError(`circleArea requires a finite, non-negative diameter (got ${diameter})`);
-  }
-  return (Math.PI * diameter * diameter) / 4;
+  const d = requireNonNegative('circleArea', 'diameter', diameter, 'm');
+  return (Math.PI * d * d) / 4;
 }

@@ -1,3 +1,4 @@
+import { AeroInputError } from '../errors';
 import type { ShapeEntry } from './shape-entry';
 import { SHAPE_LIBRARY } from './shape-library';
 
@@ -8,7 +9,7 @@ import { SHAPE_LIBRARY } from './shape-library';
  * @param orientation orientation within the family
  * @param library entries to search; the built-in library unless given
  * @returns the entry
- * @throws {RangeError} when no entry matches, naming the orientations the family offers
+ * @throws {AeroInputError} `UNKNOWN_ID` when no entry matches, naming the orientations the family offers
  * @example findShape('cube', 'edge-on').dragCoefficient // 0.8
  */
 export function findShape(shapeId: string, orientation?: string, library: readonly ShapeEntry[] = SHAPE_LIBRARY): ShapeEntry {
@@ -18,20 +19,22 @@ export function findShape(shapeId: string, orientation?: string, library: readon
     const family = library.filter((entry) => entry.family === shapeId);
     if (family.length === 1 && family[0]) return family[0];
     if (family.length > 1) {
-      throw new RangeError(
-        `findShape requires an orientation for '${shapeId}' (one of ${family.map((entry) => entry.orientation).join(', ')})`,
+      throw new AeroInputError(
+        'UNKNOWN_ID',
+        `\`findShape\` requires an orientation for '${shapeId}' (one of ${family.map((entry) => entry.orientation).join(', ')})`,
       );
     }
-    throw new RangeError(`findShape requires a known shape id (got '${shapeId}')`);
+    throw new AeroInputError('UNKNOWN_ID', `\`findShape\` requires a known shape id; got '${shapeId}'`);
   }
   const match = library.find(
     (entry) => (entry.family === shapeId || entry.id === shapeId) && entry.orientation === orientation,
   );
   if (match) return match;
   const offered = library.filter((entry) => entry.family === shapeId).map((entry) => entry.orientation);
-  throw new RangeError(
+  throw new AeroInputError(
+    'UNKNOWN_ID',
     offered.length > 0
-      ? `findShape requires an orientation of '${shapeId}' from ${offered.join(', ')} (got '${orientation}')`
-      : `findShape requires a known shape id (got '${shapeId}')`,
+      ? `\`findShape\` requires an orientation of '${shapeId}' from ${offered.join(', ')}; got '${orientation}'`
+      : `\`findShape\` requires a known shape id; got '${shapeId}'`,
   );
 }

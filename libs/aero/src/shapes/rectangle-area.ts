@@ -1,3 +1,5 @@
+import { requireNonNegative } from '../errors/require-number';
+
 /**
  * Rectangle area: the product of the two sides. Used for the frontal area of an extruded section,
  * span length × frontal height (per unit span the reference length is the frontal height).
@@ -8,12 +10,9 @@
  * @param first one side, m
  * @param second the other side, m
  * @returns area, m²
- * @throws {RangeError} when a side is negative or not finite
+ * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when a side is not finite or negative
  * @example rectangleArea(2, 0.05) // 0.1
  */
 export function rectangleArea(first: number, second: number): number {
-  if (!Number.isFinite(first) || !Number.isFinite(second) || first < 0 || second < 0) {
-    throw new RangeError(`rectangleArea requires finite, non-negative sides (got ${first}, ${second})`);
-  }
-  return first * second;
+  return requireNonNegative('rectangleArea', 'side', first, 'm') * requireNonNegative('rectangleArea', 'side', second, 'm');
 }

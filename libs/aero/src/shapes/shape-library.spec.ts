@@ -113,11 +113,11 @@ describe('reference-area rules', () => {
   });
 
   it.each([Number.NaN, Number.POSITIVE_INFINITY, 0, -1])('rejects a diameter of %f', (diameter) => {
-    expect(() => shapeArea(findShape('sphere').referenceArea, { diameter })).toThrow(/shapeArea requires/);
+    expect(() => shapeArea(findShape('sphere').referenceArea, { diameter })).toThrow(/`shapeArea` requires/);
   });
 
   it('rejects a missing dimension by name', () => {
-    expect(() => shapeArea(findShape('circular-cylinder-cross-flow').referenceArea, { diameter: 1 })).toThrow(/'length'/);
+    expect(() => shapeArea(findShape('circular-cylinder-cross-flow').referenceArea, { diameter: 1 })).toThrow(/requires a finite length \(for length × diameter/);
   });
 });
 
@@ -127,11 +127,11 @@ describe('findShape', () => {
   });
 
   it('asks for an orientation when a family has several', () => {
-    expect(() => findShape('cube')).toThrow(/findShape requires an orientation for 'cube' \(one of flat-on, edge-on\)/);
+    expect(() => findShape('cube')).toThrow(/`findShape` requires an orientation for 'cube' \(one of flat-on, edge-on\)/);
   });
 
   it('rejects an unknown id or orientation', () => {
-    expect(() => findShape('teapot')).toThrow(/findShape requires a known shape id/);
+    expect(() => findShape('teapot')).toThrow(/`findShape` requires a known shape id/);
     expect(() => findShape('cube', 'corner-on')).toThrow(/flat-on, edge-on/);
   });
 });
