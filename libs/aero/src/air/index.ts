@@ -1,1 +1,15 @@
-export {};
+export * from './cipm-constants';
+export * from './cipm-saturation-vapour-pressure';
+export * from './cipm-enhancement-factor';
+export * from './cipm-compressibility';
+export * from './cipm-vapour-mole-fraction';
+export * from './cipm-density';
+export * from './cipm-validity';
+export * from './buck-saturation-vapour-pressure';
+export * from './ideal-gas-density';
+export * from './air-density';
+export * from './sutherland-viscosity';
+export * from './kinematic-viscosity';
+export * from './speed-of-sound';
+export * from './isa-sea-level';
+export type * from './moist-air-state';
