@@ -1,1 +1,4 @@
-export {};
+export * from './dynamic-pressure';
+export * from './speed-from-dynamic-pressure';
+export * from './reynolds-number';
+export * from './mach-number';
