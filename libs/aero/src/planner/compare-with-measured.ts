@@ -1,4 +1,12 @@
 import { requireFinite, requirePositive } from '../errors/require-number';
+import { PLANNER_CAUTION } from './planner-caution';
+
+/** Result of {@link compareWithMeasured}. */
+export interface MeasuredComparison {
+  /** (estimated − measured) / measured × 100, %. */
+  differencePercent: number;
+  caution: string;
+}
 
 /**
  * Difference between a planner estimate and a measured drag area, in percent of the measured value:
@@ -8,12 +16,12 @@ import { requireFinite, requirePositive } from '../errors/require-number';
  *
  * @param estimatedDragArea planner C_D·A, m²
  * @param measuredDragArea measured C_D·A, m²
- * @returns difference, %
+ * @returns difference, %, with the planner caution
  * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when either value is not finite, or the measured value is not positive
- * @example compareWithMeasured(0.33, 0.3) // 10
+ * @example compareWithMeasured(0.33, 0.3).differencePercent // 10
  */
-export function compareWithMeasured(estimatedDragArea: number, measuredDragArea: number): number {
+export function compareWithMeasured(estimatedDragArea: number, measuredDragArea: number): MeasuredComparison {
   const estimated = requireFinite('compareWithMeasured', 'estimated drag area', estimatedDragArea, 'm²');
   const measured = requirePositive('compareWithMeasured', 'measured drag area', measuredDragArea, 'm²');
-  return ((estimated - measured) / measured) * 100;
+  return { differencePercent: ((estimated - measured) / measured) * 100, caution: PLANNER_CAUTION };
 }

@@ -32,9 +32,10 @@ describe('estimateDuration', () => {
 
 describe('compareWithMeasured', () => {
   it('is the difference in percent of the measured value', () => {
-    expect(relative(compareWithMeasured(0.33, 0.3), 10)).toBeLessThan(1e-12); // definition: 0.03 / 0.3
-    expect(relative(compareWithMeasured(0.27, 0.3), -10)).toBeLessThan(1e-12); // definition: −0.03 / 0.3
-    expect(compareWithMeasured(0.3, 0.3)).toBe(0);
+    expect(relative(compareWithMeasured(0.33, 0.3).differencePercent, 10)).toBeLessThan(1e-12); // definition: 0.03 / 0.3
+    expect(relative(compareWithMeasured(0.27, 0.3).differencePercent, -10)).toBeLessThan(1e-12); // definition: −0.03 / 0.3
+    expect(compareWithMeasured(0.3, 0.3).differencePercent).toBe(0);
+    expect(compareWithMeasured(0.3, 0.3).caution).toBe(PLANNER_CAUTION);
   });
 
   it.each([
