@@ -1,9 +1,5 @@
 import knexFactory, { type Knex } from 'knex';
 import { knexSnakeCaseMappers } from 'objection';
-import pg from 'pg';
-
-// bigint columns (money in minor units, counts) stay far below 2^53, so read them as numbers.
-pg.types.setTypeParser(pg.types.builtins.INT8, (value: string) => Number(value));
 
 /** Where the demo database lives when `DATABASE_URL` is not set. */
 export const defaultDatabaseUrl = 'postgres://postgres@127.0.0.1:54329/tunnelwright';

@@ -1,8 +1,10 @@
 import type { Knex } from 'knex';
-import { recordAudit, Service, Tunnel } from '@tunnelwright/db';
+import { recordAudit } from '@tunnelwright/db';
+import type { Model, ModelClass, PartialModelObject } from 'objection';
 import { HttpError } from '../errors/http-error';
 
-type Archivable = typeof Tunnel | typeof Service;
+/** A catalogue model that can be archived. */
+type Archivable = Model & { id: string; archivedAt: Date | null };
 
 /**
  * Archives or restores a catalogue record with its audit row in one transaction. Asking for the state
@@ -10,17 +12,19 @@ type Archivable = typeof Tunnel | typeof Service;
  */
 export async function setArchived<M extends Archivable, D>(
   knex: Knex,
-  model: M,
-  what: { entity: string; label: string; present: (record: InstanceType<M>) => D },
+  model: ModelClass<M>,
+  what: { entity: string; label: string; present: (record: M) => D },
   id: string,
   archived: boolean,
   actorId: string,
 ): Promise<D> {
   return knex.transaction(async (trx) => {
-    const record = (await model.query(trx).findById(id).forUpdate()) as InstanceType<M> | undefined;
+    // Objection's query types do not follow a generic model class; the casts restore what the call returns.
+    const record = (await model.query(trx).findById(id).forUpdate()) as unknown as M | undefined;
     if (!record) throw HttpError.notFound(what.label);
     if ((record.archivedAt !== null) === archived) return what.present(record);
-    const updated = (await model.query(trx).patchAndFetchById(id, { archivedAt: archived ? new Date() : null })) as InstanceType<M>;
+    const patch = { archivedAt: archived ? new Date() : null } as unknown as PartialModelObject<M>;
+    const updated = (await model.query(trx).patchAndFetchById(id, patch)) as unknown as M;
     await recordAudit(trx, {
       actorId,
       action: `${what.entity}.${archived ? 'archived' : 'restored'}`,

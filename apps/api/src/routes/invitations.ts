@@ -29,7 +29,7 @@ export const invitationRoutes: RouteDef[] = [
         // Inviting someone who has not accepted yet sends a fresh link with the new details.
         const user = existing
           ? await User.query(trx).patchAndFetchById(existing.id, { name: body.name, role: body.role, organisationId: organisation.id, active: true })
-          : await User.query(trx).insert({ email: body.email, name: body.name, role: body.role, organisationId: organisation.id, passwordHash: null, active: true });
+          : await User.query(trx).insert({ email: body.email, name: body.name, role: body.role, organisationId: organisation.id, passwordHash: null, active: true }).returning('*');
         user.organisation = organisation;
         const { token } = await createLinkToken(trx, user.id, 'invitation');
         const after = toUserSummary(user);

@@ -38,7 +38,7 @@ export const organisationRoutes: RouteDef[] = [
     sample: { body: (f) => ({ name: `Customer ${f.unique()}` }), expect: 201 },
     handler: async ({ caller, body, res, deps }) => {
       const organisation = await deps.knex.transaction(async (trx) => {
-        const created = await Organisation.query(trx).insert({ name: body.name, kind: 'customer', settings: {} });
+        const created = await Organisation.query(trx).insert({ name: body.name, kind: 'customer', settings: {} }).returning('*');
         await recordAudit(trx, { actorId: caller.id, action: 'organisation.created', entity: 'organisation', entityId: created.id, after: toOrganisation(created) });
         return created;
       });

@@ -56,7 +56,7 @@ export const serviceRoutes: RouteDef[] = [
     handler: async ({ caller, body, res, deps }) => {
       const created = await deps.knex.transaction(async (trx) => {
         await assertTunnelExists(trx, body);
-        const service = await Service.query(trx).insert(body);
+        const service = await Service.query(trx).insert(body).returning('*');
         await recordAudit(trx, { actorId: caller.id, action: 'service.created', entity: 'service', entityId: service.id, after: toService(service) });
         return service;
       });

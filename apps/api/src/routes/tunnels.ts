@@ -54,7 +54,7 @@ export const tunnelRoutes: RouteDef[] = [
     handler: async ({ caller, body, res, deps }) => {
       assertSpeedRange(body);
       const created = await deps.knex.transaction(async (trx) => {
-        const tunnel = await Tunnel.query(trx).insert(body);
+        const tunnel = await Tunnel.query(trx).insert(body).returning('*');
         await recordAudit(trx, { actorId: caller.id, action: 'tunnel.created', entity: 'tunnel', entityId: tunnel.id, after: toTunnel(tunnel) });
         return tunnel;
       });

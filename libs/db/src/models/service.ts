@@ -17,6 +17,13 @@ export class Service extends BaseModel {
 
   tunnel?: Tunnel;
 
+  /** `rate` is a bigint column, which pg hands over as a string; rates stay far below 2^53. */
+  override $parseDatabaseJson(json: Record<string, unknown>): Record<string, unknown> {
+    const parsed = super.$parseDatabaseJson(json);
+    if (typeof parsed['rate'] === 'string') parsed['rate'] = Number(parsed['rate']);
+    return parsed;
+  }
+
   static override relationMappings = (): RelationMappings => ({
     tunnel: {
       relation: Model.BelongsToOneRelation,
