@@ -1,1 +1,12 @@
-export {};
+export * from './thom-solid-blockage';
+export * from './frontal-area-solid-blockage';
+export * from './streamlined-wake-blockage';
+export * from './maskell-dynamic-pressure-ratio';
+export * from './maskell-corrected-drag-coefficient';
+export * from './corrected-dynamic-pressure';
+export * from './corrected-speed';
+export * from './corrected-drag-coefficient';
+export * from './horizontal-buoyancy-drag';
+export * from './open-jet-dynamic-pressure-ratio';
+export * from './turbulence-factor';
+export * from './effective-reynolds-number';
