@@ -1,1 +1,2 @@
-export {};
+export * from './body-to-wind-axes';
+export * from './sideslip-from-yaw';

@@ -1,1 +1,3 @@
-export {};
+export * from './reduction-config';
+export * from './reduction-config-error';
+export * from './parse-reduction-config';
