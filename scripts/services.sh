@@ -4,8 +4,8 @@
 #   Redis          127.0.0.1:63790  .data/redis   (append-only, noeviction, as BullMQ needs)
 #   SMTP fake      127.0.0.1:2525   .data/mail    (scripts/smtp-fake.ts)
 #
-# Usage: scripts/services.sh start|stop|status
-#        scripts/services.sh test-mail-start|test-mail-stop   (second SMTP fake for tests: 2526, .data/test-mail)
+# Usage: scripts/services.sh start|stop|status [pg] [redis] [smtp] [test-mail]
+#   Without names: pg, redis and smtp. `test-mail` is a second SMTP fake for tests (2526, .data/test-mail).
 #
 # A server already running on our data folder is reused; a stale pid file is removed; a port held by some
 # other program stops the script with a message naming the port and how to free it.
@@ -228,34 +228,63 @@ smtp_status() {
 
 # ---------------------------------------------------------------- main
 
-case "${1:-}" in
+# Each action takes the services it applies to; without names it applies to pg, redis and smtp.
+#   pg         PostgreSQL
+#   redis      Redis
+#   smtp       the SMTP fake for development (2525, .data/mail)
+#   test-mail  the SMTP fake for tests (2526, .data/test-mail)
+action="${1:-}"
+[ $# -gt 0 ] && shift
+names=("$@")
+[ ${#names[@]} -eq 0 ] && names=(pg redis smtp)
+
+for name in "${names[@]}"; do
+  case "$name" in
+    pg | redis | smtp | test-mail) ;;
+    *) echo "Unknown service \"$name\" (use pg, redis, smtp, test-mail)" >&2; exit 2 ;;
+  esac
+done
+
+reverse_names() { local i; for ((i = ${#names[@]} - 1; i >= 0; i--)); do printf '%s\n' "${names[$i]}"; done; }
+
+case "$action" in
   start)
-    pg_start
-    redis_start
-    smtp_start smtp "$SMTP_PORT" "${MAIL_DIR:-$DATA/mail}"
-    say "all services up"
+    for name in "${names[@]}"; do
+      case "$name" in
+        pg) pg_start ;;
+        redis) redis_start ;;
+        smtp) smtp_start smtp "$SMTP_PORT" "${MAIL_DIR:-$DATA/mail}" ;;
+        test-mail) smtp_start smtp-test "$TEST_SMTP_PORT" "$DATA/test-mail" ;;
+      esac
+    done
+    say "up: ${names[*]}"
     ;;
   stop)
-    smtp_stop smtp-test
-    smtp_stop smtp
-    redis_stop
-    pg_stop
+    # Without names, stop also takes down a test SMTP fake left behind by an interrupted test run.
+    [ $# -eq 0 ] && smtp_stop smtp-test
+    while read -r name; do
+      case "$name" in
+        pg) pg_stop ;;
+        redis) redis_stop ;;
+        smtp) smtp_stop smtp ;;
+        test-mail) smtp_stop smtp-test ;;
+      esac
+    done < <(reverse_names)
     ;;
   status)
     rc=0
-    pg_status || rc=1
-    redis_status || rc=1
-    smtp_status smtp "$SMTP_PORT" || rc=1
+    for name in "${names[@]}"; do
+      case "$name" in
+        pg) pg_status || rc=1 ;;
+        redis) redis_status || rc=1 ;;
+        smtp) smtp_status smtp "$SMTP_PORT" || rc=1 ;;
+        test-mail) smtp_status smtp-test "$TEST_SMTP_PORT" || rc=1 ;;
+      esac
+    done
     exit $rc
     ;;
-  test-mail-start)
-    smtp_start smtp-test "$TEST_SMTP_PORT" "$DATA/test-mail"
-    ;;
-  test-mail-stop)
-    smtp_stop smtp-test
-    ;;
   *)
-    echo "Usage: $0 start|stop|status|test-mail-start|test-mail-stop" >&2
+    echo "Usage: $0 start|stop|status [pg] [redis] [smtp] [test-mail]" >&2
     exit 2
     ;;
 esac

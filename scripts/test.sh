@@ -41,13 +41,13 @@ mkdir -p "$RESULTS"
 rm -f "$RESULTS"/*.json "$LEDGER"
 
 header "services"
-if ! bash scripts/services.sh start || ! bash scripts/services.sh test-mail-start; then
+if ! bash scripts/services.sh start pg redis test-mail; then
   summary_tool record "$LEDGER" services 1
   summary_tool report "$LEDGER"
   exit 1
 fi
 # The test SMTP fake is ours for this run only.
-trap 'bash scripts/services.sh test-mail-stop >/dev/null 2>&1 || true' EXIT
+trap 'bash scripts/services.sh stop test-mail >/dev/null 2>&1 || true' EXIT
 
 header "test database and Redis"
 prepared=0
