@@ -112,8 +112,8 @@ export class FixtureBuilder implements SampleFixtures {
   }
 
   /** A user who has been invited but not yet accepted, and the raw link token. */
-  async invitation(role: Role = 'customer'): Promise<{ user: FixtureUser; token: string }> {
-    const user = await this.user({ role, activated: false });
+  async invitation(role: Role = 'customer', name?: string): Promise<{ user: FixtureUser; token: string }> {
+    const user = await this.user({ role, activated: false, name });
     const { token } = await this.knex.transaction((trx) => createLinkToken(trx, user.id, 'invitation'));
     return { user, token };
   }
