@@ -43,6 +43,7 @@ describe('invitation path', () => {
     await dialog.getByRole('combobox', { name: 'Organisation' }).click();
     await page.getByRole('option', { name: demoCustomers.quillfen }).click();
     await expect.poll(() => dialog.getByRole('combobox', { name: 'Role' }).innerText()).toContain('Customer');
+    await page.getByRole('listbox').waitFor({ state: 'detached' });
     await page.screenshot({ path: `${shots}/invite-dialog.png` });
     await dialog.getByRole('button', { name: 'Send invitation' }).click();
     await page.getByText(`Invitation sent to ${email}.`).waitFor();

@@ -1,4 +1,4 @@
-import pg from 'pg';
+import { createKnex } from '@tunnelwright/db';
 
 /**
  * Empties the browser tests' database so the demo seed starts from a known state (the integration
@@ -9,12 +9,11 @@ export async function resetTestDatabase(databaseUrl: string): Promise<void> {
   if (!name.endsWith('_test')) {
     throw new Error(`resetTestDatabase only empties a database whose name ends in _test, not "${name}"`);
   }
-  const client = new pg.Client({ connectionString: databaseUrl });
-  await client.connect();
+  const knex = createKnex(databaseUrl);
   try {
-    await client.query('DROP SCHEMA public CASCADE');
-    await client.query('CREATE SCHEMA public');
+    await knex.raw('DROP SCHEMA public CASCADE');
+    await knex.raw('CREATE SCHEMA public');
   } finally {
-    await client.end();
+    await knex.destroy();
   }
 }

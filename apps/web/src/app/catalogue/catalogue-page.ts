@@ -64,7 +64,7 @@ export class CataloguePage {
       flags.push('Ground simulation');
     }
     if (turbulenceIntensity !== undefined) {
-      flags.push(`Turbulence intensity ${turbulenceIntensity} %`);
+      flags.push(`Turbulence intensity ${Math.round(turbulenceIntensity * 1e6) / 1e4} %`);
     }
     return flags;
   }

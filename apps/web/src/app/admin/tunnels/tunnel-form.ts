@@ -20,6 +20,16 @@ export type TunnelForm = FormGroup<{
   turbulenceIntensity: FormControl<number | null>;
 }>;
 
+/** Rounds away binary noise such as 0.30000000000000004 from unit conversions. */
+function roundTiny(value: number): number {
+  return Math.round(value * 1e9) / 1e9;
+}
+
+/** The API keeps turbulence intensity as a fraction; people read and type it as a percentage. */
+function percentFromFraction(fraction: number | undefined): number | null {
+  return fraction === undefined ? null : roundTiny(fraction * 100);
+}
+
 /** Group validator: the maximum speed must not be below the minimum speed. */
 export function speedOrder(group: AbstractControl): ValidationErrors | null {
   const min = group.get('minSpeed')?.value as number | null;
@@ -48,7 +58,7 @@ export function buildTunnelForm(fb: NonNullableFormBuilder, tunnel?: Tunnel): Tu
     ]),
     groundSimulation: fb.control(tunnel?.capabilities.groundSimulation ?? false),
     turbulenceIntensity: new FormControl<number | null>(
-      tunnel?.capabilities.turbulenceIntensity ?? null,
+      percentFromFraction(tunnel?.capabilities.turbulenceIntensity),
       Validators.min(0),
     ),
   }, { validators: speedOrder });
@@ -65,7 +75,7 @@ export function tunnelInputFrom(form: TunnelForm, tunnel?: Tunnel): TunnelInput 
     capabilities.groundSimulation = true;
   }
   if (value.turbulenceIntensity !== null) {
-    capabilities.turbulenceIntensity = value.turbulenceIntensity;
+    capabilities.turbulenceIntensity = roundTiny(value.turbulenceIntensity / 100);
   }
   return {
     name: value.name.trim(),
