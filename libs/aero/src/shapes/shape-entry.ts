@@ -35,7 +35,7 @@ export interface CharacteristicLength {
 }
 
 /** Reynolds-number range over which the tabulated value is stated to hold. `max: null` means no upper bound is given. */
-export interface ReynoldsRange {
+export interface TabulatedReynoldsRange {
   min: number;
   max: number | null;
   /** Where the range comes from: quoted from the source, or widened by an argument stated here. */
@@ -67,7 +67,7 @@ export interface ShapeEntry {
   /** Null for whole objects whose source states no Reynolds basis. */
   characteristicLength: CharacteristicLength | null;
   /** Null when the source states no range (whole objects) or when the curve's own range applies. */
-  reynoldsRange: ReynoldsRange | null;
+  reynoldsRange: TabulatedReynoldsRange | null;
   /** Whether separation is fixed by sharp edges (drag largely Reynolds-independent) or free on rounded surfaces. */
   edges: 'sharp' | 'rounded';
   /** Typical frontal area the source gives for a whole object, m². */

@@ -1,6 +1,6 @@
 import { circleArea } from './circle-area';
 import { rectangleArea } from './rectangle-area';
-import type { AreaRule, ReynoldsRange, ShapeDimensions, ShapeEntry } from './shape-entry';
+import type { AreaRule, TabulatedReynoldsRange, ShapeDimensions, ShapeEntry } from './shape-entry';
 import {
   DATA_BOOK_STANDARD_SHAPES,
   MUNSON_2D_BODIES,
@@ -42,13 +42,13 @@ const measuredFrontalArea: AreaRule = {
 
 // Sharp-edged bodies separate at their edges whatever the Reynolds number, so a value tabulated at one Re above
 // about 1e4 is taken to hold at any Re ≥ 1e4 (from memory: the usual reading of these tables, not stated on them).
-const sharpEdgedFrom = (tabulated: string): ReynoldsRange => ({
+const sharpEdgedFrom = (tabulated: string): TabulatedReynoldsRange => ({
   min: 1e4,
   max: null,
   basis: `tabulated at ${tabulated}; separation fixed at sharp edges, so taken to hold for Re ≥ 1e4 (widening from memory)`,
 });
 
-const tabulatedAbove = (min: number, text: string): ReynoldsRange => ({ min, max: null, basis: `as tabulated: ${text}` });
+const tabulatedAbove = (min: number, text: string): TabulatedReynoldsRange => ({ min, max: null, basis: `as tabulated: ${text}` });
 
 /**
  * Bodies and objects the test planner can build an article from. Each value cites its source beside it;
@@ -69,9 +69,9 @@ export const SHAPE_LIBRARY: readonly ShapeEntry[] = [
     edges: 'rounded',
     source: {
       citation:
-        'F. M. White, Fluid Mechanics: cylinder curve fit C_D ≈ 1 + 10·Re^(−2/3), as implemented and cited by reference-curves/cylinderDragWhite (its exported range applies)',
+        'F. M. White, Viscous Fluid Flow, McGraw-Hill: cylinder curve fit C_D = 1 + 10·Re^(−2/3), 1 ≤ Re ≤ 2e5, as implemented and cited by reference-curves/cylinderDragWhite (edition, equation number and range from memory there)',
     },
-    fromMemory: false,
+    fromMemory: true,
   },
   {
     id: 'square-section-flat-on',
@@ -153,7 +153,7 @@ export const SHAPE_LIBRARY: readonly ShapeEntry[] = [
     edges: 'rounded',
     source: {
       citation:
-        'F. A. Morrison, sphere drag correlation, as implemented and cited by reference-curves/sphereDragMorrison (its exported range applies)',
+        'F. A. Morrison, "Data Correlation for Drag Coefficient for Sphere", Michigan Technological University, 2013: correlation valid to Re = 1e6, as implemented and cited by reference-curves/sphereDragMorrison (title from memory there)',
     },
     fromMemory: false,
   },
