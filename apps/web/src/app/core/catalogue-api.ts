@@ -8,6 +8,7 @@ import { Observable } from 'rxjs';
 export class CatalogueApi {
   private readonly http = inject(HttpClient);
 
+  /** Active tunnels; staff may ask for archived ones as well. */
   tunnels(includeArchived = false): Observable<Tunnel[]> {
     return this.http.get<Tunnel[]>('/api/tunnels', { params: includeArchived ? { includeArchived: 'true' } : {} });
   }
@@ -24,8 +25,9 @@ export class CatalogueApi {
     return this.http.post<Tunnel>(`/api/tunnels/${id}/${archived ? 'archive' : 'restore'}`, null);
   }
 
-  services(): Observable<Service[]> {
-    return this.http.get<Service[]>('/api/services');
+  /** Active services; staff may ask for archived ones as well. */
+  services(includeArchived = false): Observable<Service[]> {
+    return this.http.get<Service[]>('/api/services', { params: includeArchived ? { includeArchived: 'true' } : {} });
   }
 
   createService(input: ServiceInput): Observable<Service> {

@@ -57,12 +57,13 @@ export class ServicesPage {
 
   protected readonly columns = ['name', 'tunnel', 'rate', 'actions'];
   protected readonly showArchived = signal(false);
-  protected readonly services = rxResource({ stream: () => this.api.services() });
-  protected readonly tunnels = rxResource({ stream: () => this.api.tunnels() });
-  protected readonly rows = computed(() => {
-    const all = this.services.hasValue() ? this.services.value() : [];
-    return this.showArchived() ? all : all.filter((service) => !service.archived);
+  protected readonly services = rxResource({
+    params: () => this.showArchived(),
+    stream: ({ params: includeArchived }) => this.api.services(includeArchived),
   });
+  // Archived tunnels too, so a service tied to one still shows the tunnel's name.
+  protected readonly tunnels = rxResource({ stream: () => this.api.tunnels(true) });
+  protected readonly rows = computed(() => (this.services.hasValue() ? this.services.value() : []));
   private readonly tunnelNames = computed(
     () => new Map((this.tunnels.hasValue() ? this.tunnels.value() : []).map((tunnel) => [tunnel.id, tunnel.name])),
   );
@@ -77,7 +78,7 @@ export class ServicesPage {
   }
 
   protected tunnelOf(service: Service): string {
-    return service.tunnelId ? (this.tunnelNames().get(service.tunnelId) ?? 'Archived tunnel') : 'Any tunnel';
+    return service.tunnelId ? (this.tunnelNames().get(service.tunnelId) ?? 'Unknown tunnel') : 'Any tunnel';
   }
 
   protected edit(service: Service | null): void {
