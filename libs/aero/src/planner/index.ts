@@ -9,3 +9,7 @@ export * from './speed-limit-check';
 export * from './reynolds-check';
 export * from './estimate-duration';
 export * from './compare-with-measured';
+export * from './part-drag-coefficient';
+export * from './build-up-drag';
+export * from './mach-check';
+export * from './tunnel-fit';
