@@ -9,10 +9,11 @@ import { SPHERE_DRAG_WHITE_RANGE, sphereDragWhite } from './sphere-drag-white';
 const ALL = [sphereDragMorrison, sphereDragMorrisonBook, sphereDragCliftGauvin, sphereDragWhite, cylinderDragWhite];
 
 describe('sphereDragMorrisonBook', () => {
-  it('gives 0.767731559965325 at Re 200', () => {
-    // Morrison 2013, An Introduction to Fluid Mechanics (book form, last term Re^0.8/461000); value from a
-    // reference library's doctest of the same formula, ±1e-12 relative.
+  it('gives 0.767731559965325 at Re 200 and 12000.134917101897 at Re 0.002', () => {
+    // Morrison 2013, An Introduction to Fluid Mechanics (book form, last term Re^0.8/461000), as implemented by the
+    // reference library fluids (C. Bell), fluids.drag.Morrison doctest and test_drag values, ±1e-12 relative.
     expect(Math.abs(sphereDragMorrisonBook(200) / 0.767731559965325 - 1)).toBeLessThan(1e-12);
+    expect(Math.abs(sphereDragMorrisonBook(0.002) / 12000.134917101897 - 1)).toBeLessThan(1e-12);
   });
 });
 
