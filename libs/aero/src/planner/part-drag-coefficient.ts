@@ -1,5 +1,4 @@
-import { CYLINDER_DRAG_WHITE_RANGE, cylinderDragWhite } from '../reference-curves/cylinder-drag-white';
-import { SPHERE_DRAG_MORRISON_RANGE, sphereDragMorrison } from '../reference-curves/sphere-drag-morrison';
+import { CYLINDER_DRAG_WHITE_RANGE, cylinderDragWhite, SPHERE_DRAG_MORRISON_RANGE, sphereDragMorrison } from '../reference-curves';
 import { AeroInputError } from '../errors';
 import { requirePositive } from '../errors/require-number';
 import type { ShapeEntry } from '../shapes';
