@@ -102,7 +102,7 @@ function shapePartDrag(part: ShapePart, conditions: BuildUpConditions, q: number
  * @returns per-part and total drag, drag areas, stated assumptions and the planner caution
  * @throws {AeroInputError} `EMPTY_INPUT` when there are no parts; `NOT_FINITE` or `OUT_OF_RANGE` when a condition or
  *   dimension is not finite and positive or a count is not a positive whole number; `UNKNOWN_ID` for an unknown shape
- * @example buildUpDrag([{ shapeId: 'sphere', dimensions: { diameter: 0.2 }, count: 1 }], { speed: 20, density: 1.225, viscosity: 1.789e-5 }).totalDrag
+ * @example buildUpDrag([{ shapeId: 'sphere', dimensions: { diameter: 0.2 }, count: 1 }], { speed: 20, density: 1.225, viscosity: 1.7894e-5 }).totalDrag // ≈ 1.81 N (Re ≈ 2.74e5, C_D ≈ 0.236)
  */
 export function buildUpDrag(parts: readonly PlannerPart[], conditions: BuildUpConditions): BuildUpResult {
   if (parts.length === 0) throw new AeroInputError('EMPTY_INPUT', `\`${FN}\` requires at least one part`);

@@ -77,7 +77,9 @@ const FN = 'tunnelFit';
  * @returns every check, the worst status, model areas, loads, assumptions and the planner caution
  * @throws {AeroInputError} `NOT_FINITE` or `OUT_OF_RANGE` when the scale, a speed or a tunnel figure is not finite
  *   and positive or the yaw margin is negative; `EMPTY_INPUT` when no speed is planned
- * @example tunnelFit({ buildUp, tunnel: { kind: 'closed-section', sectionArea: 2, maxSpeed: 50, capacities: { drag: 500 } }, scale: 0.5, speeds: [20, 40], yawMargin: 0.2 }).overall
+ * @example
+ * // buildUp: a 2 m × 0.1 m cylinder in cross-flow at 10 m/s, ISA sea level
+ * tunnelFit({ buildUp, tunnel: { kind: 'closed-section', sectionArea: 2, maxSpeed: 50, capacities: { drag: 500 } }, scale: 0.5, speeds: [20, 40], yawMargin: 0.2 }).overall // 'pass'
  */
 export function tunnelFit(input: TunnelFitInput): TunnelFitResult {
   const { buildUp, tunnel, scale, speeds, yawMargin } = input;
