@@ -1,3 +1,4 @@
+import { frontalAreaSolidBlockage } from '../corrections';
 import { requireNonNegative, requirePositive } from '../errors/require-number';
 import type { FitCheck } from './fit-check';
 import { BLOCKAGE_FAIL_RATIO, BLOCKAGE_WARN_RATIO } from './fit-thresholds';
@@ -20,7 +21,8 @@ const percent = (ratio: number): string => `${(ratio * 100).toFixed(2)} %`;
  * some parts' frontal areas are unknown.
  *
  * Source: thresholds from J. B. Barlow, W. H. Rae, A. Pope, *Low-Speed Wind Tunnel Testing*, 3rd ed., 1999
- * (attribution from memory); the ratio is a definition.
+ * (attribution from memory); the ratio is a definition; the q correction quoted in the reason is the frontal-area
+ * shortcut of `frontalAreaSolidBlockage` (same book, ch. 10).
  *
  * @param input model frontal area (m²), section area (m²), parts not counted
  * @returns check `blockage`, value = ratio (dimensionless)
@@ -33,12 +35,17 @@ export function blockageCheck(input: BlockageInput): FitCheck {
   const ratio = modelFrontalArea / sectionArea;
   const uncounted = input.uncountedParts ?? [];
   const missing = uncounted.length > 0 ? ` Frontal area unknown and not counted for: ${uncounted.join(', ')}.` : '';
+  // The frontal-area shortcut ε ≈ ¼·A/C (corrections/frontalAreaSolidBlockage) is only defined for 0 < A < C.
+  const correction =
+    modelFrontalArea > 0 && modelFrontalArea < sectionArea
+      ? ` Expected closed-section q correction (1 + ε)² ≈ ${((1 + frontalAreaSolidBlockage({ frontalArea: modelFrontalArea, sectionArea })) ** 2).toFixed(3)}.`
+      : '';
   if (ratio > BLOCKAGE_FAIL_RATIO) {
     return {
       id: 'blockage',
       status: 'fail',
       value: ratio,
-      reason: `Blockage ${percent(ratio)} is above ${percent(BLOCKAGE_FAIL_RATIO)}: corrections become large and uncertain; use a smaller scale or a larger section.${missing}`,
+      reason: `Blockage ${percent(ratio)} is above ${percent(BLOCKAGE_FAIL_RATIO)}: corrections become large and uncertain; use a smaller scale or a larger section.${correction}${missing}`,
     };
   }
   if (ratio >= BLOCKAGE_WARN_RATIO) {
@@ -46,13 +53,13 @@ export function blockageCheck(input: BlockageInput): FitCheck {
       id: 'blockage',
       status: 'warn',
       value: ratio,
-      reason: `Blockage ${percent(ratio)} is at or above ${percent(BLOCKAGE_WARN_RATIO)} (limit ${percent(BLOCKAGE_FAIL_RATIO)}): blockage corrections will be significant.${missing}`,
+      reason: `Blockage ${percent(ratio)} is at or above ${percent(BLOCKAGE_WARN_RATIO)} (limit ${percent(BLOCKAGE_FAIL_RATIO)}): blockage corrections will be significant.${correction}${missing}`,
     };
   }
   return {
     id: 'blockage',
     status: uncounted.length > 0 ? 'warn' : 'pass',
     value: ratio,
-    reason: `Blockage ${percent(ratio)} is below ${percent(BLOCKAGE_WARN_RATIO)}.${missing}`,
+    reason: `Blockage ${percent(ratio)} is below ${percent(BLOCKAGE_WARN_RATIO)}.${correction}${missing}`,
   };
 }

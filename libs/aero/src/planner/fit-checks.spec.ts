@@ -25,6 +25,8 @@ describe('blockageCheck', () => {
     const check = blockageCheck({ modelFrontalArea: 0.15, sectionArea: 2 });
     expect(Math.abs((check.value ?? 0) - 0.075) / 0.075).toBeLessThan(1e-12); // definition: 0.15 / 2
     expect(check.id).toBe('blockage');
+    // Barlow, Rae & Pope 1999 ch. 10 shortcut ε = ¼·A/C = 0.01875; (1 + ε)² = 1.0379 → "1.038".
+    expect(check.reason).toContain('1.038');
   });
 
   it('exports the thresholds it applies', () => {
