@@ -1,1 +1,10 @@
-export {};
+export type * from './measured-quantity';
+export * from './relative-difference';
+export * from './mean-with-standard-uncertainty';
+export * from './combined-standard-uncertainty';
+export * from './expanded-uncertainty';
+export * from './force-coefficient-relative-uncertainty';
+export * from './dynamic-pressure-relative-uncertainty';
+export * from './precision-limit';
+export * from './u95';
+export * from './running-statistics';
