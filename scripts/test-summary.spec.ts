@@ -25,7 +25,7 @@ describe('countStep', () => {
       numFailedTests: 2,
       numPendingTests: 1,
       numTotalTests: 10,
-      testResults: [{ name: 'a.spec.ts', status: 'failed', assertionResults: [{}, {}] }],
+      testResults: [{ name: 'a.spec.ts', status: 'failed', assertionResults: [{ status: 'passed' }, { status: 'failed' }] }],
     });
     expect(countStep('unit', 1, report, true)).toMatchObject({ passed: 7, failed: 2, skipped: 1 });
   });
@@ -35,11 +35,20 @@ describe('countStep', () => {
       numPassedTests: 3,
       numTotalTests: 3,
       testResults: [
-        { name: 'a.spec.ts', status: 'passed', assertionResults: [{}, {}, {}] },
+        { name: 'a.spec.ts', status: 'passed', assertionResults: [{ status: 'passed' }, { status: 'passed' }, { status: 'passed' }] },
         { name: 'b.spec.ts', status: 'failed', message: 'SyntaxError', assertionResults: [] },
       ],
     });
     expect(countStep('unit', 1, report, true)).toMatchObject({ passed: 3, failed: 1 });
+  });
+
+  it('counts a file whose hook failed, skipping its tests, as a failure', () => {
+    const report = vitestReport({
+      numPendingTests: 2,
+      numTotalTests: 2,
+      testResults: [{ name: 'a.test.ts', status: 'failed', assertionResults: [{ status: 'skipped' }, { status: 'skipped' }] }],
+    });
+    expect(countStep('integration', 1, report, true)).toMatchObject({ passed: 0, failed: 1, skipped: 2 });
   });
 
   it('counts test files that ran no test as a failure', () => {
@@ -56,7 +65,7 @@ describe('countStep', () => {
     const report = vitestReport({
       numPassedTests: 1,
       numTotalTests: 1,
-      testResults: [{ name: 'a.test.ts', status: 'passed', assertionResults: [{}] }],
+      testResults: [{ name: 'a.test.ts', status: 'passed', assertionResults: [{ status: 'passed' }] }],
     });
     expect(countStep('integration', 1, report, true).failed).toBe(1);
   });

@@ -20,7 +20,7 @@ export interface VitestJsonReport {
   numPendingTests: number;
   numTodoTests: number;
   numTotalTests: number;
-  testResults: { name: string; status: string; message?: string; assertionResults: unknown[] }[];
+  testResults: { name: string; status: string; message?: string; assertionResults: { status: string }[] }[];
 }
 
 /** One step's counts as stored in the ledger. */
@@ -56,11 +56,13 @@ export function countStep(step: string, exitCode: number, report: VitestJsonRepo
   const skipped = report.numPendingTests + report.numTodoTests;
   let failed = report.numFailedTests;
   const notes: string[] = [];
-  // A file that throws while loading has no test results of its own, only a failed status.
-  const brokenFiles = report.testResults.filter((file) => file.status === 'failed' && file.assertionResults.length === 0).length;
+  // A file that throws while loading, or whose beforeAll throws, fails with no failed test of its own.
+  const brokenFiles = report.testResults.filter(
+    (file) => file.status === 'failed' && !file.assertionResults.some((test) => test.status === 'failed'),
+  ).length;
   if (brokenFiles > 0) {
     failed += brokenFiles;
-    notes.push(`${brokenFiles} file(s) failed to load`);
+    notes.push(`${brokenFiles} file(s) failed outside a test (loading or a hook)`);
   }
   if (files === 0) {
     if (exitCode !== 0) return { step, passed: 0, failed: 1, skipped: 0, note: `runner exited ${exitCode}` };
