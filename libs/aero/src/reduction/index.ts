@@ -1,1 +1,12 @@
-export {};
+export { ENGINE_VERSION } from '../engine-version';
+export * from './design-caution';
+export * from './reduction-error';
+export * from './reduction-warning';
+export * from './reduction-result';
+export * from './sample-channels';
+export * from './coefficient-uncertainty';
+export * from './sample-reducer';
+export * from './point-accumulator';
+export * from './finish-point';
+export * from './reduce-run';
+export * from './format-result-csv';
