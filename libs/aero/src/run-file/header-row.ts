@@ -127,7 +127,8 @@ export function parseHeaderRow(
   const has = (id: ChannelId) => seen.has(id);
   const atColumn = (id: ChannelId) => {
     const index = seen.get(id) ?? 0;
-    return cells.slice(0, index).reduce((sum, cell) => sum + cell.length + 1, 0);
+    const lead = cells[index].length - cells[index].trimStart().length;
+    return cells.slice(0, index).reduce((sum, cell) => sum + cell.length + 1, lead);
   };
   for (const id of ALWAYS_REQUIRED) {
     if (!has(id)) issue('MISSING_CHANNEL', 0, `required channel "${id}" is missing from the header row`);

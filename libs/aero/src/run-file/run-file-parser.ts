@@ -446,7 +446,8 @@ export class RunFileParser {
       for (let p = at; p < end; p++) if (buf[p] === this.delimiter) count++;
     }
     let stop = at;
-    if (!tooMany) while (stop > lineStart && buf[stop - 1] === CR) stop--;
+    if (tooMany) while (stop < end && (buf[stop] === SPACE || buf[stop] === TAB)) stop++;
+    else while (stop > lineStart && buf[stop - 1] === CR) stop--;
     const column = this.columnAt(buf, lineStart, stop);
     if (!tooMany && last) {
       this.fatal('TRUNCATED', this.lineCount, column,

@@ -27,7 +27,7 @@ describe('unit factors against NIST SP 811 (2008) App. B.8', () => {
     ['kn', 'speed', 5.144444e-1, 'knot (nautical mile per hour) to meter per second'],
     ['ft/s', 'speed', 3.048e-1, 'foot per second to meter per second (exact)'],
     ['deg', 'angle', 1.745329e-2, 'degree (°) to radian'],
-  ] as const)('%s (%s) = %d SI: %s', (symbol, kind, expected) => {
+  ] as const)('%s (%s) = %d SI: %s', (symbol, kind, expected, _entry) => {
     expect(Math.abs(factor(symbol, kind) / expected - 1)).toBeLessThan(SP811_TOLERANCE);
   });
 
