@@ -126,7 +126,7 @@ describe('housekeeping worker', () => {
       await seedTokens();
       const job = await running.housekeepingQueue.add(housekeepingJobs.purgeExpiredTokens, {});
       const result = (await job.waitUntilFinished(events, 30_000)) as { refreshTokens: number; userTokens: number };
-      // The schedule's immediate first run happened at start-up, before these rows existed.
+      // The schedule runs its first purge at start-up, before these rows existed.
       expect(result).toEqual({ refreshTokens: 1, userTokens: 2 });
       expect(await remaining()).toEqual({
         refresh: ['refresh rotated, not expired', 'refresh valid'],

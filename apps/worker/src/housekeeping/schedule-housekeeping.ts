@@ -8,7 +8,7 @@ import { housekeepingJobs, purgeExpiredTokensEveryMs } from '../queues';
 export async function scheduleHousekeeping(queue: Queue, everyMs: number = purgeExpiredTokensEveryMs): Promise<void> {
   await queue.upsertJobScheduler(
     housekeepingJobs.purgeExpiredTokens,
-    { every: everyMs, immediately: true },
+    { every: everyMs },
     {
       name: housekeepingJobs.purgeExpiredTokens,
       data: {},
