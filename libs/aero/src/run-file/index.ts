@@ -4,3 +4,4 @@ export * from './run-file-header';
 export * from './run-file-error';
 export * from './read-run-file-options';
 export * from './read-run-file';
+export * from './preview-run-file';
