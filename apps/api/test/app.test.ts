@@ -78,7 +78,7 @@ describe('app-wide behaviour', () => {
     });
 
     it('demo mode off → 404 even for a lab manager', async () => {
-      const plain = await import('./support/test-app').then((m) => m.createTestApp({ demoMode: false }));
+      const plain = await createTestApp({ demoMode: false }, { knex: t.knex });
       try {
         const user = await new FixtureBuilder(plain.knex, plain.config.jwtSecret).user({ role: 'lab_manager' });
         const response = await request(plain.app).get('/api/dev/mailbox').set('Authorization', `Bearer ${user.token}`);

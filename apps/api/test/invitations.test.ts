@@ -129,6 +129,24 @@ describe('/api/invitations and the public invitation and reset links', () => {
       expect((await request(t.app).get(`/api/auth/invitations/${firstToken}`)).status).toBe(410);
     });
 
+    it('mail server unreachable → 503, and neither the account nor its audit row is kept', async () => {
+      const offline = await createTestApp({ smtpUrl: 'smtp://127.0.0.1:9' }, { knex: t.knex });
+      try {
+        const offlineManager = await new FixtureBuilder(offline.knex, offline.config.jwtSecret).user({ role: 'lab_manager' });
+        const email = `unsent-${fixtures.unique()}@example.com`;
+        const response = await request(offline.app)
+          .post('/api/invitations')
+          .set('Authorization', `Bearer ${offlineManager.token}`)
+          .send({ email, name: 'Never Mailed', role: 'customer', organisationId: customerOrganisationId });
+        expect(response.status).toBe(503);
+        expect(response.body.detail).toMatch(/Nothing was saved/);
+        expect(await t.knex('users').where({ email }).first()).toBeUndefined();
+        expect(await t.knex('audit_entries').where({ actorId: offlineManager.id }).first()).toBeUndefined();
+      } finally {
+        await offline.close();
+      }
+    });
+
     it('invalid body → 400 listing every field', async () => {
       const response = await invite({ email: 'nope', name: '', role: 'boss' });
       expect(response.status).toBe(400);

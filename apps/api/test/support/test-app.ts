@@ -25,8 +25,9 @@ export interface TestApp {
 /**
  * Builds the real app against the real test database, Redis and SMTP fake, migrating the database to the
  * latest schema first so one file can run on its own. Rate-limit counters get a prefix of their own.
+ * A second app in the same file must pass `shared.knex`: Objection binds its models to one knex globally.
  */
-export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise<TestApp> {
+export async function createTestApp(overrides: Partial<AppConfig> = {}, shared?: { knex: Knex }): Promise<TestApp> {
   const config: AppConfig = {
     ...loadConfig({
       ...process.env,
@@ -38,7 +39,7 @@ export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise
     }),
     ...overrides,
   };
-  const knex = createKnex(config.databaseUrl);
+  const knex = shared?.knex ?? createKnex(config.databaseUrl);
   await knex.migrate.latest(migrationConfig);
   const redis = new Redis(config.redisUrl, { maxRetriesPerRequest: 2 });
   const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
@@ -54,7 +55,7 @@ export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise
       if (keys.length > 0) await redis.del(...keys);
       mailer.close();
       await redis.quit();
-      await knex.destroy();
+      if (!shared) await knex.destroy();
     },
   };
 }
