@@ -4,6 +4,7 @@ import { createWriteStream, existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { startMailCatcher, type MailCatcher } from './mail-catcher';
 import { resetTestDatabase } from './reset-test-database';
+import { acquireRunLock } from './run-lock';
 
 /** The repository root, two folders above `apps/web/e2e`. */
 export const repoRoot = resolve(import.meta.dirname, '../../../..');
@@ -11,7 +12,7 @@ export const repoRoot = resolve(import.meta.dirname, '../../../..');
 const port = Number(process.env.TW_E2E_PORT ?? 3100);
 /** Where the browser reaches the API and the built client. */
 export const baseUrl = `http://127.0.0.1:${port}`;
-const databaseUrl = process.env.TW_E2E_DATABASE_URL ?? 'postgres://postgres@127.0.0.1:54329/tunnelwright_test';
+const databaseUrl = process.env.TW_E2E_DATABASE_URL ?? 'postgres://postgres@127.0.0.1:54329/tunnelwright_e2e';
 const redisUrl = process.env.TW_E2E_REDIS_URL ?? 'redis://127.0.0.1:63790/1';
 const webDist = join(repoRoot, 'dist/web/browser');
 const logFile = '/tmp/tw-e2e-api.log';
@@ -43,12 +44,35 @@ async function waitForHealth(child: ChildProcess, timeoutMs: number): Promise<vo
 }
 
 /**
- * Empties the test database and seeds the demo data into it, then starts the real API (built client included)
- * on port 3100 in demo mode, mailing into a throw-away catcher, and waits until it is healthy.
+ * Waits for other browser-test runs to finish, empties the e2e database and seeds the demo data into it,
+ * then starts the real API (built client included) on port 3100 in demo mode, mailing into a throw-away
+ * catcher, and waits until it is healthy.
  */
 export async function startApiServer(): Promise<ApiServer> {
   if (!existsSync(join(webDist, 'index.html'))) {
     throw new Error('dist/web/browser is missing: run `npx ng build --configuration production` first.');
+  }
+  const releaseLock = await acquireRunLock();
+  try {
+    return await startLocked(releaseLock);
+  } catch (error) {
+    releaseLock();
+    throw error;
+  }
+}
+
+async function portAnswers(): Promise<boolean> {
+  try {
+    await fetch(`${baseUrl}/api/health`, { signal: AbortSignal.timeout(2_000) });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+async function startLocked(releaseLock: () => void): Promise<ApiServer> {
+  if (await portAnswers()) {
+    throw new Error(`Something already answers on ${baseUrl}; stop it (ss -ltnp 'sport = :${port}') and run again.`);
   }
   await resetTestDatabase(databaseUrl);
   const seed = spawnSync('node', ['--import', 'tsx', 'scripts/seed.ts'], {
@@ -104,6 +128,7 @@ export async function startApiServer(): Promise<ApiServer> {
       }
       await mail.stop();
       log.end();
+      releaseLock();
     },
   };
 }

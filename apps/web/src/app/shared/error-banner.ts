@@ -27,6 +27,9 @@ import { MatIconModule } from '@angular/material/icon';
       background: var(--mat-sys-error-container);
       color: var(--mat-sys-on-error-container);
     }
+    mat-icon {
+      flex: none;
+    }
     .text {
       flex: 1 1 auto;
     }

@@ -18,6 +18,8 @@ import { serviceUnitLabels } from '../../shared/service-unit-labels';
 export interface ServiceDialogData {
   readonly service: Service | null;
   readonly tunnels: readonly Tunnel[];
+  /** Currency a new service starts with: the one the lab's other services use. */
+  readonly defaultCurrency?: string;
 }
 
 /** Creates or edits a service. The rate is typed as a decimal amount and sent as integer minor units. */
@@ -61,7 +63,7 @@ export class ServiceDialog {
       this.service ? fromMinorUnits(this.service.rate, this.service.currency) : null,
       [Validators.required, Validators.min(0)],
     ),
-    currency: [this.service?.currency ?? 'EUR', [Validators.required, Validators.pattern(/^[A-Z]{3}$/)]],
+    currency: [this.service?.currency ?? this.data.defaultCurrency ?? 'EUR', [Validators.required, Validators.pattern(/^[A-Z]{3}$/)]],
     tunnelId: new FormControl<string | null>(this.service?.tunnelId ?? null),
   });
   protected readonly busy = signal(false);

@@ -85,6 +85,7 @@ export class ServicesPage {
     const data: ServiceDialogData = {
       service,
       tunnels: this.tunnels.hasValue() ? this.tunnels.value().filter((tunnel) => !tunnel.archived) : [],
+      defaultCurrency: this.rows()[0]?.currency,
     };
     this.dialog
       .open(ServiceDialog, { data, width: '640px', maxHeight: '90vh' })
