@@ -27,8 +27,11 @@ export interface TareTable {
  * interpolateTare({ yaw: [0, 1], pitch: [0], loads: [[[0,0,0,0,0,0]], [[2,0,0,0,0,0]]] }, 0.5, 0, new Float64Array(6))[0]; // 1
  */
 export function interpolateTare(table: TareTable, yaw: number, pitch: number, out: Float64Array): Float64Array {
-  const [i, u] = cell('yaw', table.yaw, yaw);
-  const [j, v] = cell('pitch', table.pitch, pitch);
+  // Index and fraction are computed apart (no tuple) so that a call allocates nothing.
+  const i = cellIndex('yaw', table.yaw, yaw);
+  const j = cellIndex('pitch', table.pitch, pitch);
+  const u = cellFraction(table.yaw, i, yaw);
+  const v = cellFraction(table.pitch, j, pitch);
   const i1 = u > 0 ? i + 1 : i;
   const j1 = v > 0 ? j + 1 : j;
   const t00 = table.loads[i][j];
@@ -39,17 +42,22 @@ export function interpolateTare(table: TareTable, yaw: number, pitch: number, ou
   return out;
 }
 
-/** Index of the cell holding x and the fractional position in it. */
-function cell(what: string, breakpoints: readonly number[], x: number): [number, number] {
+/** Index of the first breakpoint of the cell holding x. */
+function cellIndex(what: string, breakpoints: readonly number[], x: number): number {
   const last = breakpoints.length - 1;
   const tolerance = 1e-12;
   if (!(x >= breakpoints[0] - tolerance && x <= breakpoints[last] + tolerance)) {
     const deg = (r: number) => ((r * 180) / Math.PI).toFixed(3);
     throw new AeroInputError('NOT_COVERED', `\`interpolateTare\` requires a ${what} inside the tare table (${deg(breakpoints[0])}…${deg(breakpoints[last])} deg); got ${deg(x)} deg`);
   }
-  if (last === 0) return [0, 0];
   let i = 0;
   while (i < last - 1 && x > breakpoints[i + 1]) i++;
+  return i;
+}
+
+/** Fractional position of x in the cell starting at breakpoint i, clamped to 0…1 (0 for a single breakpoint). */
+function cellFraction(breakpoints: readonly number[], i: number, x: number): number {
+  if (breakpoints.length === 1) return 0;
   const u = (x - breakpoints[i]) / (breakpoints[i + 1] - breakpoints[i]);
-  return [i, Math.min(1, Math.max(0, u))];
+  return Math.min(1, Math.max(0, u));
 }

@@ -54,8 +54,8 @@ export function finishPoint(accumulator: PointAccumulator, context: PointContext
   const point = accumulator.point;
   const channels = Object.fromEntries(
     SAMPLE_CHANNELS.map((name, i) => {
-      const s = accumulator.statistics[i];
-      const summary: ChannelSummary = { mean: s.mean, standardDeviation: n > 1 ? s.standardDeviation : 0, standardError: n > 1 ? s.standardError : 0 };
+      const s = accumulator.statistics;
+      const summary: ChannelSummary = { mean: s.mean(i), standardDeviation: s.standardDeviation(i), standardError: s.standardError(i) };
       return [name, summary];
     }),
   ) as Record<SampleChannel, ChannelSummary>;

@@ -6,6 +6,7 @@ export * from './reduction-result';
 export * from './sample-channels';
 export * from './coefficient-uncertainty';
 export * from './sample-reducer';
+export * from './channel-statistics';
 export * from './point-accumulator';
 export * from './finish-point';
 export * from './reduce-run';

@@ -1,10 +1,10 @@
-import { RunningStatistics } from '../uncertainty';
+import { ChannelStatistics } from './channel-statistics';
 import { SAMPLE_CHANNELS } from './sample-channels';
 
 /** Running statistics of every channel of one point; memory does not grow with the number of samples. */
 export class PointAccumulator {
-  /** One accumulator per channel of `SAMPLE_CHANNELS`. */
-  readonly statistics: RunningStatistics[] = SAMPLE_CHANNELS.map(() => new RunningStatistics());
+  /** Running statistics of every channel of `SAMPLE_CHANNELS`. */
+  readonly statistics = new ChannelStatistics(SAMPLE_CHANNELS.length);
   sampleCount = 0;
   firstLine = 0;
   lastLine = 0;
@@ -26,8 +26,7 @@ export class PointAccumulator {
    * @param overCapacity - whether a component exceeded its capacity
    */
   push(values: Float64Array, line: number, outsideCipm: boolean, overCapacity: boolean): void {
-    const statistics = this.statistics;
-    for (let i = 0; i < statistics.length; i++) statistics[i].push(values[i]);
+    this.statistics.push(values);
     if (this.sampleCount === 0) this.firstLine = line;
     this.lastLine = line;
     this.sampleCount++;
