@@ -9,8 +9,8 @@ import { relativeWind } from './relative-wind';
 describe('relativeWind', () => {
   it('reproduces the 40 CFR 1037.528 example: 7.1 mph at 47° on 64.9 mph → 69.93 mph, 4.26°', () => {
     // 40 CFR 1037.528 worked example. Vector addition of the printed inputs gives 69.9352 mph and 4.258°; the
-    // printed 69.93 mph sits 0.0052 mph below, well inside what rounding the inputs to 0.1 mph allows (±0.05 mph
-    // of wind moves v_air by up to ±0.034 mph), so the airspeed is compared to ±0.01 mph and the yaw to ±0.005°.
+    // printed 69.93 mph sits 0.0052 mph below, well inside what rounding the inputs to 0.1 mph allows (±0.05 mph on
+    // each input moves v_air by up to ±0.09 mph), so the airspeed is compared to ±0.01 mph and the yaw to ±0.005°.
     const wind = relativeWind({ groundSpeed: 64.9 * MILE_PER_HOUR, windSpeed: 7.1 * MILE_PER_HOUR, windDirection: degreesToRadians(47) });
     expect(Math.abs(wind.airspeed / MILE_PER_HOUR - 69.93)).toBeLessThan(0.01);
     expect(Math.abs(radiansToDegrees(wind.yawAngle) - 4.26)).toBeLessThan(0.005);
