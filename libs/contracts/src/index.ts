@@ -6,3 +6,4 @@ export * from './catalogue';
 export * from './audit';
 export * from './mailbox';
 export * from './paging';
+export * from './ingest';
