@@ -13,3 +13,5 @@ export * from './part-drag-coefficient';
 export * from './build-up-drag';
 export * from './mach-check';
 export * from './tunnel-fit';
+export * from './full-scale-power';
+export * from './head-tail-power-series';
