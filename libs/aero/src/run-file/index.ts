@@ -5,3 +5,4 @@ export * from './run-file-error';
 export * from './read-run-file-options';
 export * from './read-run-file';
 export * from './preview-run-file';
+export * from './import-profile';
