@@ -2,7 +2,7 @@ import { AeroInputError } from '../errors/aero-input-error';
 import { requireFinite } from '../errors/require-number';
 import { CELSIUS_ZERO } from '../units/nist-constants';
 
-/** Coefficients of Buck's e_s over water: 611.21 Pa, 18.678, 234.5 °C, 257.14 °C. */
+/** Coefficients of Buck's e_s over water (1996 revision): 611.21 Pa, 18.678, 234.5 °C, 257.14 °C. */
 export const BUCK_COEFFICIENTS = Object.freeze({ a: 611.21, b: 18.678, c: 234.5, d: 257.14 });
 
 /**
@@ -11,7 +11,8 @@ export const BUCK_COEFFICIENTS = Object.freeze({ a: 611.21, b: 18.678, c: 234.5,
  * e_s = 611.21 · exp[(18.678 − t/234.5) · t/(257.14 + t)] Pa, with t in degrees Celsius.
  *
  * Source: Buck 1981, "New equations for computing vapor pressure and enhancement factor",
- * J. Appl. Meteorol. 20:1527–1532 (the e_w form, revised coefficients as commonly quoted).
+ * J. Appl. Meteorol. 20:1527–1532, for the form. These coefficients are Buck's 1996 revision of it (Buck Research
+ * CR-1A hygrometer manual); the 1981 paper itself printed (18.729 − t/227.3)·t/(257.87 + t) (from memory).
  *
  * @param temperatureCelsius - air temperature t, °C
  * @returns saturation vapour pressure e_s, Pa

@@ -8,7 +8,7 @@ import { CIPM_COMPRESSIBILITY_COEFFICIENTS } from './cipm-constants';
  * Z = 1 − (p/T)·[a0 + a1·t + a2·t² + (b0 + b1·t)·x_v + (c0 + c1·t)·x_v²] + (p/T)²·(d + e·x_v²),
  * with T in kelvin and t = T − 273.15 in degrees Celsius.
  *
- * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. A1.4.
+ * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. A1.4 (equation number from memory).
  *
  * @param pressure - total air pressure p, Pa
  * @param temperature - thermodynamic temperature T, K

@@ -16,7 +16,7 @@ import type { CipmAirState } from './moist-air-state';
  * ρ = p·M_a/(Z·R·T) · [1 − x_v·(1 − M_v/M_a)], with M_a = [28.96546 + 12.011·(x_CO2 − 0.0004)] g/mol,
  * x_v from relative humidity and Z the compressibility factor.
  *
- * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. 1. Valid 600–1100 hPa and 15–27 °C; outside
+ * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. 1 (equation number from memory). Valid 600–1100 hPa and 15–27 °C; outside
  * that range it still returns a value, so check {@link isWithinCipmValidity} and warn.
  *
  * @param state - pressure (Pa), temperature (K), relative humidity (fraction 0–1), CO2 mole fraction (default 0.0004)

@@ -8,7 +8,7 @@ import { CIPM_ENHANCEMENT_COEFFICIENTS } from './cipm-constants';
  *
  * f = α + β·p + γ·t², with p in pascals and t in degrees Celsius.
  *
- * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. A1.3.
+ * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. A1.3 (equation number from memory).
  *
  * @param pressure - total air pressure p, Pa
  * @param temperatureCelsius - air temperature t, °C

@@ -6,7 +6,7 @@ import { CIPM_SATURATION_COEFFICIENTS } from './cipm-constants';
  *
  * p_sv = exp(A·T² + B·T + C + D/T), with T the thermodynamic temperature in kelvin.
  *
- * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. A1.2; valid 15–27 °C with the rest of the equation.
+ * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. A1.2 (equation number from memory); valid 15–27 °C with the rest of the equation.
  *
  * @param temperature - thermodynamic temperature T, K
  * @returns saturation vapour pressure p_sv, Pa

@@ -10,7 +10,7 @@ import type { MoistAirState } from './moist-air-state';
  *
  * x_v = h · f(p, t) · p_sv(T) / p, with h the relative humidity as a fraction.
  *
- * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. A1.1 and its note on relative humidity.
+ * Source: Picard et al. 2008, Metrologia 45:149 (CIPM-2007), eq. A1.1 (equation number from memory).
  *
  * @param state - pressure (Pa), temperature (K) and relative humidity (fraction 0–1)
  * @returns mole fraction of water vapour x_v (0–1)

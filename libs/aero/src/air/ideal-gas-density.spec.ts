@@ -8,12 +8,12 @@ const ROOM = { pressure: 101325, temperature: 293.15, relativeHumidity: 0.5 };
 
 describe('buckSaturationVapourPressure', () => {
   it('gives 2338.34 Pa at 20 °C', () => {
-    // Buck 1981, J. Appl. Meteorol. 20:1527: e_s(20 °C) = 2338.34 Pa, ±0.01 Pa absolute.
+    // Buck 1981, J. Appl. Meteorol. 20:1527, 1996 coefficients: e_s(20 °C) = 2338.34 Pa, ±0.01 Pa absolute.
     expect(Math.abs(buckSaturationVapourPressure(20) - 2338.34)).toBeLessThan(0.01);
   });
 
   it('gives 611.21 Pa at 0 °C', () => {
-    // Buck 1981, J. Appl. Meteorol. 20:1527: the leading coefficient is e_s(0 °C) = 611.21 Pa (exact by form).
+    // Buck 1981 form with 1996 coefficients: the leading coefficient is e_s(0 °C) = 611.21 Pa (exact by form).
     expect(buckSaturationVapourPressure(0)).toBe(611.21);
   });
 
