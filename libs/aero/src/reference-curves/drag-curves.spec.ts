@@ -25,7 +25,7 @@ describe('sphereDragMorrison', () => {
   });
 
   it('approaches Stokes drag 24/Re at low Re', () => {
-    // Stokes 1851 (Camb. Phil. Trans. 9:8): C_D = 24/Re for creeping flow; the fit's other terms add ~2.6 % at Re 0.01.
+    // Stokes 1851 (Camb. Phil. Trans. 9:8 — from memory): C_D = 24/Re for creeping flow; the fit's other terms add ~2.6 % at Re 0.01.
     expect(Math.abs(sphereDragMorrison(0.01) / 2400 - 1)).toBeLessThan(0.001);
   });
 

@@ -8,7 +8,7 @@ export const SPHERE_DRAG_CLIFT_GAUVIN_RANGE: ReynoldsRange = Object.freeze({ min
  *
  * C_D = (24/Re)·(1 + 0.15·Re^0.687) + 0.42/(1 + 4.25e4·Re^−1.16), for Re < 3e5 (subcritical only).
  *
- * Source: Clift & Gauvin 1970, "The motion of particles in turbulent gas streams", Proc. Chemeca '70, 1:14–28;
+ * Source: Clift & Gauvin 1970, "The motion of particles in turbulent gas streams", Proc. Chemeca '70, 1:14–28 (pages from memory);
  * also Clift, Grace & Weber 1978, Bubbles, Drops and Particles (other coefficient sets exist).
  *
  * @param reynoldsNumber - Reynolds number based on diameter (dimensionless)

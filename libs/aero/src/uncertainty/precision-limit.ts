@@ -4,7 +4,7 @@ import { requireNonNegative } from '../errors/require-number';
 /**
  * Large-sample precision limit of a mean: P = 2·S/√N.
  * Source: AIAA S-071A-1999, Assessment of Experimental Uncertainty with Application to Wind Tunnel Testing
- * (form from memory); Coleman & Steele 1995, AIAA J. 33(10):1888.
+ * (form from memory); Coleman & Steele 1995, AIAA J. 33(10):1888 (page from memory).
  *
  * @param standardDeviation - sample standard deviation S of the readings, their unit
  * @param n - number of readings N, a whole number ≥ 1

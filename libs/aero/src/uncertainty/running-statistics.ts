@@ -7,7 +7,7 @@ import { requireFinite } from '../errors/require-number';
  * For each new x: n ← n + 1; δ = x − x̄; x̄ ← x̄ + δ/n; M2 ← M2 + δ·(x − x̄). Then s² = M2/(n − 1).
  *
  * Source: Welford 1962, "Note on a method for calculating corrected sums of squares and products",
- * Technometrics 4(3):419–420; Knuth, TAOCP vol. 2, 4.2.2.
+ * Technometrics 4(3):419–420; Knuth, TAOCP vol. 2, 4.2.2 (pages and section from memory).
  *
  * @example
  * const stats = new RunningStatistics();

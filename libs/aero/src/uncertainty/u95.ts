@@ -2,7 +2,7 @@ import { requireNonNegative } from '../errors/require-number';
 
 /**
  * Large-sample 95 % uncertainty from bias and precision limits: U95 = √(B² + P²).
- * Source: AIAA S-071A-1999 (form from memory); Coleman & Steele 1995, AIAA J. 33(10):1888.
+ * Source: AIAA S-071A-1999 (form from memory); Coleman & Steele 1995, AIAA J. 33(10):1888 (page from memory).
  *
  * @param bias - bias (systematic) limit B, unit of the result, ≥ 0
  * @param precision - precision limit P, unit of the result, ≥ 0 (see `precisionLimit`)

@@ -10,7 +10,7 @@ import { resolveWindAveragingOptions, type WindAveragingOptions } from './wind-a
  * C_D·(1 + (V_w/V)²). Only 0…π is integrated, so the vehicle is taken as left–right symmetric.
  *
  * Source: SAE J1252 (wind-averaged drag, V = 55 mph, V_w = 7 mph — values from memory); Ingram 1978, "The wind-averaged
- * drag coefficient applied to heavy goods vehicles", TRRL SR392.
+ * drag coefficient applied to heavy goods vehicles", TRRL SR392 (title from memory).
  *
  * @param dragCoefficientAtYaw - body-axis drag coefficient as a function of yaw angle ψ in rad (ψ ≥ 0 here)
  * @param options - vehicle speed (m/s, default 55 mph), wind speed (m/s, default 7 mph), Simpson steps (default 720)
