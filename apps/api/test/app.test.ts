@@ -14,7 +14,7 @@ describe('app-wide behaviour', () => {
     fixtures = new FixtureBuilder(t.knex, t.config.jwtSecret);
     manager = await fixtures.user({ role: 'lab_manager' });
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   describe('GET /api/health', () => {
     it('→ 200 ok with the demo flag', async () => {

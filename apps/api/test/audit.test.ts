@@ -13,7 +13,7 @@ describe('/api/audit', () => {
     fixtures = new FixtureBuilder(t.knex, t.config.jwtSecret);
     manager = await fixtures.user({ role: 'lab_manager', name: 'Audit Keeper' });
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   describe('GET /', () => {
     it('filtered by entity and record → newest first, with actor name and before/after', async () => {

@@ -21,7 +21,7 @@ describe('/api/auth', () => {
     fixtures = new FixtureBuilder(t.knex, t.config.jwtSecret);
     analyst = await fixtures.user({ role: 'analyst' });
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   describe('POST /login', () => {
     it('right password → 200 with an access token and an httpOnly, SameSite=Strict refresh cookie on /api/auth', async () => {

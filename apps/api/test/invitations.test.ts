@@ -22,7 +22,7 @@ describe('/api/invitations and the public invitation and reset links', () => {
     customerOrganisationId = await fixtures.customerOrganisationId();
     labId = (await fixtures.lab()).id;
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   describe('POST /api/invitations', () => {
     it('full flow: mail arrives in the SMTP fake, the link previews, accepting sets the password and signs in', async () => {

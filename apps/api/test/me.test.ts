@@ -11,7 +11,7 @@ describe('/api/me', () => {
     t = await createTestApp();
     fixtures = new FixtureBuilder(t.knex, t.config.jwtSecret);
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   describe('GET /', () => {
     it('→ the session user with the organisation name', async () => {

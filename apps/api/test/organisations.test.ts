@@ -13,7 +13,7 @@ describe('/api/organisations', () => {
     fixtures = new FixtureBuilder(t.knex, t.config.jwtSecret);
     manager = await fixtures.user({ role: 'lab_manager' });
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   describe('GET /', () => {
     it('lab manager → the lab first, then customers by name', async () => {

@@ -33,7 +33,7 @@ describe('role × route matrix (generated from the route table)', () => {
     for (const role of roles) principals.set(role, await fixtures.user({ role }));
     principals.set('other-organisation customer', await fixtures.user({ role: 'customer', organisationId: (await fixtures.customerOrganisation()).id }));
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   it('covers every route of the table', () => {
     expect(routeTable.length).toBeGreaterThanOrEqual(25);

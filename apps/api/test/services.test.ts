@@ -17,7 +17,7 @@ describe('/api/services', () => {
     manager = await fixtures.user({ role: 'lab_manager' });
     customer = await fixtures.user({ role: 'customer' });
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   describe('POST /', () => {
     it('valid → 201, rate kept as integer minor units, audit row', async () => {

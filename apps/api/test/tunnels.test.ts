@@ -34,7 +34,7 @@ describe('/api/tunnels', () => {
     customer = await fixtures.user({ role: 'customer' });
     technician = await fixtures.user({ role: 'technician' });
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   describe('POST /', () => {
     it('valid → 201 with SI fields and defaults, audit row in the same transaction', async () => {

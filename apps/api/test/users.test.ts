@@ -18,7 +18,7 @@ describe('/api/users', () => {
     fixtures = new FixtureBuilder(t.knex, t.config.jwtSecret);
     manager = await fixtures.user({ role: 'lab_manager' });
   });
-  afterAll(() => t.close());
+  afterAll(() => t?.close());
 
   describe('GET /', () => {
     it('q finds by name, sort and order apply, pages count from 1 with a total', async () => {

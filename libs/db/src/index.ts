@@ -22,3 +22,4 @@ export { ReductionPoint } from './models/reduction-point';
 export { OutboxMessage } from './models/outbox-message';
 export { dispatchOutbox, type OutboxSender } from './outbox';
 export * from './raw-store';
+export { reductionQueue, queuePrefix } from './reduction-jobs';

@@ -2,7 +2,7 @@ import { randomBytes } from 'node:crypto';
 import type { Express } from 'express';
 import { Redis } from 'ioredis';
 import type { Knex } from 'knex';
-import { createKnex, migrationConfig } from '@tunnelwright/db';
+import { createKnex, migrationConfigWithLoader } from '@tunnelwright/db';
 import { createApp } from '../../src/app';
 import { loadConfig, type AppConfig } from '../../src/config';
 import type { AppDeps } from '../../src/deps';
@@ -40,7 +40,8 @@ export async function createTestApp(overrides: Partial<AppConfig> = {}, shared?:
     ...overrides,
   };
   const knex = shared?.knex ?? createKnex(config.databaseUrl);
-  await knex.migrate.latest(migrationConfig);
+  // Loaded through the test runner's own import, which understands TypeScript.
+  await knex.migrate.latest(migrationConfigWithLoader((path) => import(/* @vite-ignore */ path)));
   const redis = new Redis(config.redisUrl, { maxRetriesPerRequest: 2 });
   const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
   const deps: AppDeps = { config, knex, redis, mailer, rateLimitPrefix: `tw:test:${randomBytes(6).toString('hex')}:` };
