@@ -94,16 +94,16 @@ async function main(): Promise<void> {
     const plainTimes: number[] = [];
     const readerTimes: number[] = [];
     for (let round = 1; round <= 5; round++) {
-    const plain = run('plain', chunkBytes);
-    const reader = run('reader', chunkBytes);
-    plainTimes.push(plain.seconds);
-    readerTimes.push(reader.seconds);
-    if (reader.count !== rows) throw new Error(`bench-read: reader delivered ${reader.count} rows, expected ${rows}`);
-    console.log(
-      `${chunkBytes / 1024} KiB chunks, round ${round}: plain read ${plain.seconds.toFixed(3)} s (${(size / 1e6 / plain.seconds).toFixed(0)} MB/s, peak RSS ${plain.maxRssMb.toFixed(0)} MB) | ` +
-        `readRunFile ${reader.seconds.toFixed(3)} s (${(rows / reader.seconds / 1e6).toFixed(2)} M rows/s, peak RSS ${reader.maxRssMb.toFixed(0)} MB) | ` +
-        `ratio ${(reader.seconds / plain.seconds).toFixed(2)}×`,
-    );
+      const plain = run('plain', chunkBytes);
+      const reader = run('reader', chunkBytes);
+      plainTimes.push(plain.seconds);
+      readerTimes.push(reader.seconds);
+      if (reader.count !== rows) throw new Error(`bench-read: reader delivered ${reader.count} rows, expected ${rows}`);
+      console.log(
+        `${chunkBytes / 1024} KiB chunks, round ${round}: plain read ${plain.seconds.toFixed(3)} s (${(size / 1e6 / plain.seconds).toFixed(0)} MB/s, peak RSS ${plain.maxRssMb.toFixed(0)} MB) | ` +
+          `readRunFile ${reader.seconds.toFixed(3)} s (${(rows / reader.seconds / 1e6).toFixed(2)} M rows/s, peak RSS ${reader.maxRssMb.toFixed(0)} MB) | ` +
+          `ratio ${(reader.seconds / plain.seconds).toFixed(2)}×`,
+      );
     }
     const plainMedian = median(plainTimes);
     const readerMedian = median(readerTimes);
