@@ -35,29 +35,19 @@ function noise(uniform: () => number, sd: number): number {
   return (sum - 6) * sd;
 }
 
-/** Wind-axis loads (D, L, Y_w) to body axes (A, Y, N): the transpose of the rotation in docs/methods.md. */
-function windToBody(drag: number, lift: number, side: number, alpha: number, beta: number): [number, number, number] {
-  const ca = Math.cos(alpha), sa = Math.sin(alpha), cb = Math.cos(beta), sb = Math.sin(beta);
-  const axial = drag * ca * cb - lift * sa + side * ca * sb;
-  const sideForce = -drag * sb + side * cb;
-  const normal = drag * sa * cb + lift * ca + side * sa * sb;
-  return [axial, sideForce, normal];
-}
-
 const fixed = (x: number, digits: number) => x.toFixed(digits);
 const deg = Math.PI / 180;
 
 interface Article { S: number; L: number }
 
-/** Body-axis loads [Fx, Fy, Fz, Mx, My, Mz] of an invented vehicle at yaw ψ (rad) and dynamic pressure q (Pa). */
-function vehicleLoads(article: Article, psi: number, q: number, cd0: number): number[] {
-  const beta = -psi;
-  const cd = cd0 + 0.55 * psi * psi;
-  const cl = 0.08 + 0.9 * psi * psi;
-  const cy = 2.1 * psi;
-  const [a, y, n] = windToBody(cd * q * article.S, cl * q * article.S, cy * q * article.S, 0, beta);
-  const qsl = q * article.S * article.L;
-  return [a, y, n, 0.35 * psi * qsl, -0.04 * qsl, 0.55 * psi * qsl];
+/**
+ * Body-axis loads [Fx, Fy, Fz, Mx, My, Mz] of an invented vehicle at yaw ψ (rad) and dynamic pressure q (Pa):
+ * body-axis drag C_X = cx0 + 0.45ψ² (rising with yaw, as road vehicles do), side force 2.1ψ, lift 0.08 + 0.9ψ².
+ */
+function vehicleLoads(article: Article, psi: number, q: number, cx0: number): number[] {
+  const qs = q * article.S;
+  const qsl = qs * article.L;
+  return [(cx0 + 0.45 * psi * psi) * qs, 2.1 * psi * qs, (0.08 + 0.9 * psi * psi) * qs, 0.35 * psi * qsl, -0.04 * qsl, 0.55 * psi * qsl];
 }
 
 function closedCarRun(): { csv: string; config: object } {

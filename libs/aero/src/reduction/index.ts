@@ -9,5 +9,6 @@ export * from './sample-reducer';
 export * from './channel-statistics';
 export * from './point-accumulator';
 export * from './finish-point';
+export * from './full-scale';
 export * from './reduce-run';
 export * from './format-result-csv';

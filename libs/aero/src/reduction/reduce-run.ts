@@ -10,6 +10,7 @@ import { ReductionError } from './reduction-error';
 import type { ReductionResult } from './reduction-result';
 import type { ReductionWarning } from './reduction-warning';
 import { SampleReducer } from './sample-reducer';
+import { addFullScale, windAveragedDrag } from './full-scale';
 
 /** Options of `reduceRun`. */
 export interface ReduceRunOptions {
@@ -75,7 +76,7 @@ export async function reduceRun(input: RunFileInput, config: ReductionConfig, op
     .sort((a, b) => a.point - b.point)
     .map((accumulator) => {
       try {
-        return finishPoint(accumulator, context);
+        return addFullScale(finishPoint(accumulator, context), config);
       } catch (error) {
         if (error instanceof AeroInputError) {
           const code = error.code === 'ZERO_WIND' ? 'ZERO_WIND' : 'BAD_VALUE';
@@ -84,6 +85,13 @@ export async function reduceRun(input: RunFileInput, config: ReductionConfig, op
         throw error;
       }
     });
+  let windAveraged: ReductionResult['windAveraged'];
+  try {
+    windAveraged = windAveragedDrag(results, config);
+  } catch (error) {
+    if (!(error instanceof AeroInputError)) throw error;
+    throw new ReductionError('NOT_COVERED', `NOT_COVERED windAveraging: ${error.message}`, fileName, h.headerLine, 1);
+  }
   return {
     engineVersion: ENGINE_VERSION,
     inputSha256: hash.digest('hex'),
@@ -95,6 +103,7 @@ export async function reduceRun(input: RunFileInput, config: ReductionConfig, op
     dynamicPressureFactor: h.pressureKind === 'reference' ? context.dynamicPressureFactor : null,
     config,
     points: results,
+    ...(windAveraged ? { windAveraged } : {}),
     warnings,
     caution: DESIGN_CAUTION,
   };
