@@ -19,7 +19,12 @@ export interface YawSweepInterpolator {
   readonly mirrored: boolean;
 }
 
-/** Sorted distinct yaw angles with the mean C_D of repeat points at each. */
+/**
+ * Sorts a sweep by yaw and replaces repeat points at one yaw by their mean C_D.
+ *
+ * @param points - checked sweep points, yaw in rad
+ * @returns distinct yaw angles, rising, each with its mean drag coefficient
+ */
 function collapseRepeats(points: readonly YawSweepPoint[]): YawSweepPoint[] {
   const sorted = [...points].sort((a, b) => a.yawAngle - b.yawAngle);
   const result: { yawAngle: number; sum: number; count: number }[] = [];
@@ -35,7 +40,13 @@ function collapseRepeats(points: readonly YawSweepPoint[]): YawSweepPoint[] {
   return result.map((r) => ({ yawAngle: r.yawAngle, dragCoefficient: r.sum / r.count }));
 }
 
-/** Linear interpolation in a sorted table; the caller keeps x inside it. */
+/**
+ * Linear interpolation of C_D in a sorted table of one side of the sweep.
+ *
+ * @param table - points with yaw (rad) rising from 0, at least one
+ * @param x - yaw to evaluate, rad, inside the table (the caller checks)
+ * @returns interpolated drag coefficient
+ */
 function interpolate(table: readonly YawSweepPoint[], x: number): number {
   if (table.length === 1) return table[0].dragCoefficient;
   let i = 0;
