@@ -66,9 +66,12 @@ describe('SignInPage', () => {
     await (await signInButton()).click();
     backend
       .expectOne('/api/auth/login')
-      .flush(null, { status: 429, statusText: 'Too Many Requests', headers: { 'Retry-After': '120' } });
+      .flush(
+        { type: 'about:blank', title: 'Too many attempts', status: 429, detail: 'Too many failed sign-in attempts.' },
+        { status: 429, statusText: 'Too Many Requests', headers: { 'Retry-After': '120' } },
+      );
     await (await signInButton()).getText();
-    expect(host.querySelector('[role=alert]')?.textContent).toContain('Try again in 2 minutes.');
+    expect(host.querySelector('[role=alert]')?.textContent).toContain('Too many failed sign-in attempts. Try again in 2 minutes.');
   });
 
   it('goes to the start page after signing in', async () => {

@@ -80,7 +80,8 @@ export class SignInPage {
 
   private describe(error: unknown): string {
     if (error instanceof HttpErrorResponse && error.status === 429) {
-      return `Too many sign-in attempts. ${retryAfterText(error.headers.get('Retry-After'))}`;
+      const wait = retryAfterText(error.headers.get('Retry-After'));
+      return `${problemMessage(error, 'Too many sign-in attempts.')} ${wait}`;
     }
     if (error instanceof HttpErrorResponse && error.status === 401) {
       return problemMessage(error, 'That e-mail and password do not match an active account.');
