@@ -16,6 +16,8 @@ DATA="$ROOT/.data"
 PG_BIN="${PG_BIN:-/usr/lib/postgresql/15/bin}"
 PG_PORT="${TW_PG_PORT:-54329}"
 PGDATA="$DATA/pg"
+# .data/pg may link to a cluster kept outside the repository (see pg_prepare_dir); PostgreSQL gets the real path.
+[ -L "$PGDATA" ] && PGDATA="$(readlink -f "$PGDATA")"
 REDIS_PORT="${TW_REDIS_PORT:-63790}"
 REDIS_DIR="$DATA/redis"
 SMTP_PORT="${TW_SMTP_PORT:-2525}"
@@ -74,12 +76,22 @@ wait_for_port() {
 pg_running() { as_pg "$PG_BIN/pg_ctl" -D "$PGDATA" status >/dev/null 2>&1; }
 
 pg_prepare_dir() {
+  if is_root && [ ! -e "$PGDATA" ] && ! runuser -u postgres -- test -x "$DATA"; then
+    # The repository sits below a folder the postgres user may not enter (e.g. /root): keep the cluster
+    # in a folder of its own outside and point .data/pg at it, so every other path stays the same.
+    local outside
+    outside="/var/tmp/tunnelwright-pg-$(printf '%s' "$ROOT" | sha256sum | cut -c1-12)"
+    say "PostgreSQL: the postgres user cannot enter $DATA; keeping the cluster in $outside (linked as .data/pg)"
+    mkdir -p "$outside"
+    ln -sfn "$outside" "$PGDATA"
+    PGDATA="$outside"
+  fi
   mkdir -p "$PGDATA"
   if is_root; then
     chown postgres "$PGDATA"
     chmod 700 "$PGDATA"
     if ! runuser -u postgres -- test -x "$PGDATA"; then
-      fail "the postgres user cannot reach $PGDATA (a parent folder is not searchable by others). Run: chmod o+x on the folders above $ROOT, or clone the repository somewhere readable."
+      fail "the postgres user cannot reach $PGDATA (a parent folder is not searchable by others). Remove .data/pg and start again, or clone the repository somewhere readable."
     fi
   fi
 }
@@ -111,9 +123,12 @@ pg_start() {
       rm -f "$PGDATA/postmaster.pid"
     fi
     port_in_use "$PG_PORT" && port_taken_message "$PG_PORT" "PostgreSQL"
+    # A Unix socket path is limited to about 107 bytes; deep checkouts put the socket in /tmp instead.
+    local socket_dir="$PGDATA"
+    [ "${#socket_dir}" -gt 80 ] && socket_dir=/tmp
     say "PostgreSQL: starting on 127.0.0.1:$PG_PORT (log: .data/pg/log)"
     as_pg "$PG_BIN/pg_ctl" -D "$PGDATA" -l "$PGDATA/log" -w -t 30 \
-      -o "-c listen_addresses=127.0.0.1 -p $PG_PORT -k $PGDATA" start >/dev/null \
+      -o "-c listen_addresses=127.0.0.1 -p $PG_PORT -k $socket_dir" start >/dev/null \
       || { tail -20 "$PGDATA/log" >&2 || true; fail "PostgreSQL did not start (log: $PGDATA/log)"; }
   fi
   cd "$ROOT"
