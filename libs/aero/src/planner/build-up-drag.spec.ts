@@ -59,6 +59,16 @@ describe('buildUpDrag', () => {
     expect(result.parts[0]?.warnings[0]?.message).toMatch(/below/);
   });
 
+  it('holds a curve at its range end and warns when Re is above the curve range', () => {
+    // cylinderDragWhite range 1…2e5 (reference-curves); a 1 m cylinder at 10 m/s has Re ≈ 6.85e5.
+    const result = buildUpDrag([{ shapeId: 'circular-cylinder-cross-flow', dimensions: { length: 1, diameter: 1 }, count: 1 }], {
+      speed: 10,
+      ...AIR,
+    });
+    expect(result.parts[0]?.warnings.map((w) => w.code)).toEqual(['RE_ABOVE_RANGE']);
+    expect(relative(result.parts[0]?.dragCoefficient ?? 0, whiteCylinder(2e5))).toBeLessThan(1e-12); // held at Re = 2e5
+  });
+
   it('uses the typical frontal area of a whole object unless one is given', () => {
     const typical = buildUpDrag([{ shapeId: 'rider-racing', dimensions: {}, count: 1 }], { speed: 10, ...AIR });
     // Munson bicycle entries: racing C_D = 0.88 on 0.36 m² → C_D·A = 0.3168 m².
