@@ -110,6 +110,11 @@ function stripLocation(message: string): string {
 
 // Run when started as a script, not when imported by a test.
 if (import.meta.url === `file://${process.argv[1]}` || process.argv[1]?.endsWith('reduce-cli.ts')) {
+  // A reader that stops early (`| head`) closes the pipe; that is not a failure of the reduction.
+  process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code !== 'EPIPE') throw error;
+    process.exit(0);
+  });
   const status = await runReduceCli(process.argv.slice(2), (t) => process.stdout.write(t), (t) => process.stderr.write(t));
   process.exitCode = status;
 }
