@@ -10,7 +10,8 @@ import { demoServices, demoTunnels } from './seed/catalogue';
 import { demoCustomers, demoLab, demoPassword, demoUsers } from './seed/demo-users';
 
 async function ensureOrganisation(trx: Knex.Transaction, name: string, kind: 'lab' | 'customer', created: string[]): Promise<Organisation> {
-  const existing = await Organisation.query(trx).findOne({ name });
+  // There is exactly one lab; if the database already has one (under any name) it is the demo lab.
+  const existing = kind === 'lab' ? await Organisation.query(trx).findOne({ kind: 'lab' }) : await Organisation.query(trx).findOne({ name });
   if (existing) return existing;
   created.push(`organisation ${name}`);
   return Organisation.query(trx).insert({
@@ -26,7 +27,7 @@ async function seed(knex: Knex): Promise<string[]> {
   const passwordHash = await argon2.hash(demoPassword, { type: argon2.argon2id });
   await knex.transaction(async (trx) => {
     const lab = await ensureOrganisation(trx, demoLab.name, 'lab', created);
-    const organisations = new Map<string, Organisation>([[lab.name, lab]]);
+    const organisations = new Map<string, Organisation>([[demoLab.name, lab]]);
     for (const name of Object.values(demoCustomers)) organisations.set(name, await ensureOrganisation(trx, name, 'customer', created));
 
     for (const person of demoUsers) {

@@ -5,7 +5,7 @@ import { routeTable } from '../src/routes/route-table';
 import { FixtureBuilder, type FixtureUser } from './support/fixtures';
 import { createTestApp, type TestApp } from './support/test-app';
 
-type Principal = 'anonymous' | Role | 'other-organisation customer';
+type Principal = 'anonymous' | Role | 'other-organisation customer' | 'deactivated lab_manager';
 
 /**
  * The status a principal should get from a route, read from the route table itself: 401 without a token,
@@ -14,7 +14,7 @@ type Principal = 'anonymous' | Role | 'other-organisation customer';
  */
 function expectedStatus(route: (typeof routeTable)[number], principal: Principal): number {
   if (route.access === 'public') return route.sample.expect;
-  if (principal === 'anonymous') return 401;
+  if (principal === 'anonymous' || principal === 'deactivated lab_manager') return 401;
   const role: Role = principal === 'other-organisation customer' ? 'customer' : principal;
   if (route.access !== 'authenticated' && !route.access.includes(role)) return 403;
   if (principal === 'other-organisation customer' && route.sample.crossOrganisation) return 404;
@@ -31,6 +31,7 @@ describe('role × route matrix (generated from the route table)', () => {
     fixtures = new FixtureBuilder(t.knex, t.config.jwtSecret);
     principals.set('anonymous', null);
     for (const role of roles) principals.set(role, await fixtures.user({ role }));
+    principals.set('deactivated lab_manager', await fixtures.user({ role: 'lab_manager', active: false }));
     principals.set('other-organisation customer', await fixtures.user({ role: 'customer', organisationId: (await fixtures.customerOrganisation()).id }));
   });
   afterAll(() => t?.close());
@@ -41,7 +42,7 @@ describe('role × route matrix (generated from the route table)', () => {
 
   for (const route of routeTable) {
     describe(`${route.method.toUpperCase()} ${route.fullPath}`, () => {
-      for (const principal of ['anonymous', ...roles, 'other-organisation customer'] as Principal[]) {
+      for (const principal of ['anonymous', ...roles, 'other-organisation customer', 'deactivated lab_manager'] as Principal[]) {
         it(`${principal} → ${route.access === 'public' ? 'public' : 'guarded'}`, async () => {
           const caller = principals.get(principal) ?? null;
           const params = route.sample.params ? await route.sample.params(fixtures) : {};
