@@ -8,7 +8,7 @@
 import { execFileSync } from 'node:child_process';
 import { createReadStream, createWriteStream, existsSync, statSync } from 'node:fs';
 import { once } from 'node:events';
-import { tmpdir, cpus } from 'node:os';
+import { cpus, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { readRunFile } from '../../libs/aero/src/run-file';
@@ -63,9 +63,12 @@ async function readerRead(path: string, highWaterMark: number): Promise<number> 
 
 async function phase(kind: string, chunkBytes: number, path: string): Promise<void> {
   const start = process.hrtime.bigint();
+  const cpuStart = process.cpuUsage();
   const count = kind === 'plain' ? await plainRead(path, chunkBytes) : await readerRead(path, chunkBytes);
   const seconds = Number(process.hrtime.bigint() - start) / 1e9;
-  process.stdout.write(JSON.stringify({ seconds, count, maxRssMb: process.resourceUsage().maxRSS / 1024 }));
+  const cpu = process.cpuUsage(cpuStart);
+  const cpuSeconds = (cpu.user + cpu.system) / 1e6;
+  process.stdout.write(JSON.stringify({ seconds, cpuSeconds, count, maxRssMb: process.resourceUsage().maxRSS / 1024 }));
 }
 
 async function main(): Promise<void> {
@@ -83,9 +86,11 @@ async function main(): Promise<void> {
   const run = (kind: string, chunkBytes: number) =>
     JSON.parse(execFileSync(process.execPath, ['--import', 'tsx', self, '--phase', kind, String(chunkBytes), path], { encoding: 'utf8' })) as {
       seconds: number;
+      cpuSeconds: number;
       count: number;
       maxRssMb: number;
     };
+  console.log(`load average ${loadavg().map((l) => l.toFixed(2)).join(' ')} (other work on the machine skews wall times)`);
   console.log(`file ${path}: ${rows} rows, ${(size / 1e6).toFixed(1)} MB; ${cpus()[0]?.model ?? 'cpu'} ×${cpus().length}, node ${process.version}`);
   // Warm the page cache once so both timings read from memory.
   await plainRead(path);
@@ -100,8 +105,8 @@ async function main(): Promise<void> {
       readerTimes.push(reader.seconds);
       if (reader.count !== rows) throw new Error(`bench-read: reader delivered ${reader.count} rows, expected ${rows}`);
       console.log(
-        `${chunkBytes / 1024} KiB chunks, round ${round}: plain read ${plain.seconds.toFixed(3)} s (${(size / 1e6 / plain.seconds).toFixed(0)} MB/s, peak RSS ${plain.maxRssMb.toFixed(0)} MB) | ` +
-          `readRunFile ${reader.seconds.toFixed(3)} s (${(rows / reader.seconds / 1e6).toFixed(2)} M rows/s, peak RSS ${reader.maxRssMb.toFixed(0)} MB) | ` +
+        `${chunkBytes / 1024} KiB chunks, round ${round}: plain read ${plain.seconds.toFixed(3)} s, CPU ${plain.cpuSeconds.toFixed(3)} s (${(size / 1e6 / plain.seconds).toFixed(0)} MB/s, peak RSS ${plain.maxRssMb.toFixed(0)} MB) | ` +
+          `readRunFile ${reader.seconds.toFixed(3)} s, CPU ${reader.cpuSeconds.toFixed(3)} s (${(rows / reader.seconds / 1e6).toFixed(2)} M rows/s, peak RSS ${reader.maxRssMb.toFixed(0)} MB) | ` +
           `ratio ${(reader.seconds / plain.seconds).toFixed(2)}×`,
       );
     }
