@@ -1,5 +1,5 @@
 import { mkdirSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { demoUsers } from '../../../scripts/seed/demo-users';
 import { startApiServer, type ApiServer } from './support/api-server';
 import { launchBrowser, type TestBrowser } from './support/browser';
@@ -23,6 +23,10 @@ describe('catalogue administration', () => {
     mkdirSync(shots, { recursive: true });
     api = await startApiServer();
     browser = await launchBrowser();
+  });
+
+  afterEach(() => {
+    expect(browser.problems).toEqual([]);
   });
 
   afterAll(async () => {

@@ -1,5 +1,5 @@
 import { mkdirSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { demoCustomers, demoUsers } from '../../../scripts/seed/demo-users';
 import { startApiServer, type ApiServer } from './support/api-server';
 import { launchBrowser, type TestBrowser } from './support/browser';
@@ -15,6 +15,10 @@ describe('invitation path', () => {
     mkdirSync(shots, { recursive: true });
     api = await startApiServer();
     browser = await launchBrowser();
+  });
+
+  afterEach(() => {
+    expect(browser.problems).toEqual([]);
   });
 
   afterAll(async () => {

@@ -1,6 +1,6 @@
 import { mkdirSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '@tunnelwright/contracts';
 import { demoUsers } from '../../../scripts/seed/demo-users';
 import { startApiServer, type ApiServer } from './support/api-server';
@@ -32,6 +32,10 @@ describe('signed-in shell', () => {
     mkdirSync(shots, { recursive: true });
     api = await startApiServer();
     browser = await launchBrowser();
+  });
+
+  afterEach(() => {
+    expect(browser.problems).toEqual([]);
   });
 
   afterAll(async () => {

@@ -21,6 +21,11 @@ export interface TestBrowser {
   readonly context: BrowserContext;
   /** A new tab with no cookies left from earlier tests. */
   freshPage(): Promise<Page>;
+  /**
+   * Uncaught exceptions and console errors of the current tab since `freshPage()`, except the
+   * browser's own "Failed to load resource" lines for answers the tests provoke (401, 404, 410).
+   */
+  readonly problems: string[];
   close(): Promise<void>;
 }
 
@@ -34,14 +39,24 @@ export async function launchBrowser(): Promise<TestBrowser> {
     viewport: { width: 1280, height: 800 },
   });
   context.setDefaultTimeout(15_000);
+  const problems: string[] = [];
   return {
     context,
+    problems,
     freshPage: async () => {
       for (const open of context.pages()) {
         await open.close();
       }
       await context.clearCookies();
-      return context.newPage();
+      problems.length = 0;
+      const page = await context.newPage();
+      page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
+      page.on('console', (message) => {
+        if (message.type() === 'error' && !message.text().startsWith('Failed to load resource')) {
+          problems.push(`console: ${message.text()}`);
+        }
+      });
+      return page;
     },
     close: async () => {
       await context.close();
