@@ -1,12 +1,17 @@
+import { articleRoutes } from './articles';
 import { auditRoutes } from './audit';
+import { balanceRoutes } from './balances';
 import { authRoutes } from './auth';
 import { devMailboxRoutes } from './dev-mailbox';
 import { healthRoutes } from './health';
 import { invitationRoutes } from './invitations';
 import { meRoutes } from './me';
 import { organisationRoutes } from './organisations';
+import { reductionRoutes } from './reductions';
 import type { Resource, RouteDef } from './route';
+import { runRoutes } from './runs';
 import { serviceRoutes } from './services';
+import { testRoutes } from './tests';
 import { tunnelRoutes } from './tunnels';
 import { userRoutes } from './users';
 
@@ -25,6 +30,11 @@ export const resources: Resource[] = [
   { mount: '/api/services', routes: serviceRoutes },
   { mount: '/api/audit', routes: auditRoutes },
   { mount: '/api/dev', routes: devMailboxRoutes },
+  { mount: '/api/articles', routes: articleRoutes },
+  { mount: '/api/balances', routes: balanceRoutes },
+  { mount: '/api/tests', routes: testRoutes },
+  { mount: '/api/runs', routes: runRoutes },
+  { mount: '/api/reductions', routes: reductionRoutes },
 ];
 
 /** One row per route with its full path, as the test matrix reads it. */

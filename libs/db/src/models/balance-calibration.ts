@@ -23,4 +23,16 @@ export class BalanceCalibration extends BaseModel {
   static override get jsonAttributes(): string[] {
     return ['matrices'];
   }
+
+  /** pg turns a `date` into a Date at local midnight; keep the calendar date it names instead. */
+  override $parseDatabaseJson(json: Record<string, unknown>): Record<string, unknown> {
+    const parsed = super.$parseDatabaseJson(json);
+    for (const key of ['calibratedOn', 'dueOn']) {
+      const value = parsed[key];
+      if (value instanceof Date) {
+        parsed[key] = `${value.getFullYear()}-${String(value.getMonth() + 1).padStart(2, '0')}-${String(value.getDate()).padStart(2, '0')}`;
+      }
+    }
+    return parsed;
+  }
 }

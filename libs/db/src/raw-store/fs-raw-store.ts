@@ -12,7 +12,7 @@ import { contentKey, isContentKey, type RawStore, type StoredObject } from './ra
 export class FsRawStore implements RawStore {
   constructor(readonly root: string) {}
 
-  async put(input: Readable | AsyncIterable<Buffer | Uint8Array>): Promise<StoredObject> {
+  async put(input: Readable | AsyncIterable<Buffer | Uint8Array> | Iterable<Buffer | Uint8Array>): Promise<StoredObject> {
     const temporaryDir = join(this.root, 'tmp');
     await mkdir(temporaryDir, { recursive: true });
     const temporary = join(temporaryDir, `${randomUUID()}.part`);

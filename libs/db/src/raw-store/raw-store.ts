@@ -13,7 +13,7 @@ export interface StoredObject {
  */
 export interface RawStore {
   /** Stores the stream's bytes and says where they are; storing the same bytes twice gives the same key. */
-  put(input: Readable | AsyncIterable<Buffer | Uint8Array>): Promise<StoredObject>;
+  put(input: Readable | AsyncIterable<Buffer | Uint8Array> | Iterable<Buffer | Uint8Array>): Promise<StoredObject>;
   /** The bytes stored under `key`; throws `RawObjectMissingError` if there are none. */
   get(key: string): Promise<Readable>;
   /** Whether bytes are stored under `key`. */

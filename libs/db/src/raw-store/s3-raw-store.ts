@@ -44,7 +44,7 @@ export class S3RawStore implements RawStore {
     this.client = new S3Client(config);
   }
 
-  async put(input: Readable | AsyncIterable<Buffer | Uint8Array>): Promise<StoredObject> {
+  async put(input: Readable | AsyncIterable<Buffer | Uint8Array> | Iterable<Buffer | Uint8Array>): Promise<StoredObject> {
     const hashing = new HashingStream();
     const source = input instanceof Readable ? input : Readable.from(input);
     source.on('error', (error) => hashing.destroy(error));

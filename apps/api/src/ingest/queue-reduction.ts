@@ -1,0 +1,45 @@
+import { ENGINE_VERSION, type ReductionConfig } from '@tunnelwright/aero';
+import { OutboxMessage, Reduction, reductionQueue, Run } from '@tunnelwright/db';
+import type { Knex } from 'knex';
+import type { CalibrationUse } from './calibration-check';
+
+/** What a new reduction version is made of. */
+export interface NewReduction {
+  runId: string;
+  rawFileId: string;
+  inputSha256: string;
+  config: ReductionConfig;
+  calibration: CalibrationUse;
+  createdBy: string;
+}
+
+/**
+ * Inside `trx`: adds the next reduction version of the run (state queued) and the outbox message that
+ * will start it. The run row is locked so two requests never take the same version number.
+ * @returns the reduction and the outbox message id to dispatch after commit
+ */
+export async function queueReduction(trx: Knex.Transaction, input: NewReduction): Promise<{ reduction: Reduction; outboxId: string }> {
+  await Run.query(trx).findById(input.runId).forUpdate();
+  const latest = (await Reduction.query(trx).where('runId', input.runId).max('version as version').first()) as unknown as { version: number | null } | undefined;
+  const reduction = await Reduction.query(trx)
+    .insert({
+      runId: input.runId,
+      rawFileId: input.rawFileId,
+      version: (latest?.version ?? 0) + 1,
+      engineVersion: ENGINE_VERSION,
+      config: input.config as unknown as Record<string, unknown>,
+      calibrationId: input.calibration.calibration?.id ?? null,
+      overrideId: input.calibration.overrideId,
+      state: 'queued',
+      progress: 0,
+      inputSha256: input.inputSha256,
+      warnings: [],
+      summary: null,
+      createdBy: input.createdBy,
+    })
+    .returning('*');
+  const message = await OutboxMessage.query(trx)
+    .insert({ queue: reductionQueue.name, jobName: reductionQueue.jobName, jobId: reduction.id, payload: { reductionId: reduction.id } })
+    .returning('*');
+  return { reduction, outboxId: message.id };
+}
