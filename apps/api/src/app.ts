@@ -39,6 +39,8 @@ export function createApp(deps: AppDeps): Express {
           // Angular Material injects component styles at run time.
           'style-src': ["'self'", "'unsafe-inline'"],
           'img-src': ["'self'", 'data:'],
+          // The production build loads its stylesheet with onload="this.media='all'"; allow exactly that handler.
+          'script-src-attr': ["'unsafe-hashes'", "'sha256-MhtPZXr7+LpJUY5qtMutB+qWfQtMaPccfe7QXtCcEYc='"],
         },
       },
     }),
@@ -68,7 +70,7 @@ export function createApp(deps: AppDeps): Express {
       type: 'https://tunnelwright.invalid/problems/not-found',
       title: 'Not found',
       status: 404,
-      detail: 'The web client is not built yet. Run `npm run build:web`.',
+      detail: existsSync(index) ? 'There is nothing at this address.' : 'The web client is not built yet. Run `npm run build:web`.',
       instance: req.originalUrl,
     });
   });

@@ -1,3 +1,6 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { FixtureBuilder, type FixtureUser } from './support/fixtures';
@@ -30,6 +33,22 @@ describe('app-wide behaviour', () => {
       expect(response.status).toBe(404);
       expect(response.headers['content-type']).toMatch(/application\/problem\+json/);
       expect(response.body).toMatchObject({ status: 404, title: 'Not found' });
+    });
+  });
+
+  describe('client routes', () => {
+    it('non-API paths → the built client’s index.html; /api paths never do', async () => {
+      const dir = mkdtempSync(join(tmpdir(), 'tw-web-'));
+      writeFileSync(join(dir, 'index.html'), '<!doctype html><title>client shell</title>');
+      const web = await createTestApp({ webDist: dir }, { knex: t.knex });
+      try {
+        const page = await request(web.app).get('/catalogue/tunnels');
+        expect(page.status).toBe(200);
+        expect(page.text).toContain('client shell');
+        expect((await request(web.app).get('/api/catalogue')).headers['content-type']).toMatch(/problem\+json/);
+      } finally {
+        await web.close();
+      }
     });
   });
 
@@ -91,6 +110,13 @@ describe('app-wide behaviour', () => {
   });
 
   describe('security headers', () => {
+    it('the CSP allows only the stylesheet onload handler of the built client', async () => {
+      const csp = String((await request(t.app).get('/api/health')).headers['content-security-policy']);
+      expect(csp).toContain("script-src 'self'");
+      expect(csp).toContain("script-src-attr 'unsafe-hashes' 'sha256-MhtPZXr7+LpJUY5qtMutB+qWfQtMaPccfe7QXtCcEYc='");
+      expect(csp).not.toContain('upgrade-insecure-requests');
+    });
+
     it('helmet headers are set and Express is not announced', async () => {
       const response = await request(t.app).get('/api/health');
       expect(response.headers['x-content-type-options']).toBe('nosniff');
