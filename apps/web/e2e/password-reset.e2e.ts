@@ -1,0 +1,69 @@
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { demoUsers } from '../../../scripts/seed/demo-users';
+import { startApiServer, type ApiServer } from './support/api-server';
+import { launchBrowser, type TestBrowser } from './support/browser';
+import { signIn } from './support/sign-in';
+
+describe('forgotten password and profile', () => {
+  let api: ApiServer;
+  let browser: TestBrowser;
+
+  beforeAll(async () => {
+    api = await startApiServer();
+    browser = await launchBrowser();
+  });
+
+  afterEach(() => {
+    expect(browser.problems).toEqual([]);
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    await api?.stop();
+  });
+
+  it('a customer resets a forgotten password through the mailed link, signs in with it and renames themself', async () => {
+    const customer = demoUsers.find((user) => user.email === 'customer@tarnwick.example');
+    const manager = demoUsers.find((user) => user.role === 'lab_manager');
+    if (!customer || !manager) {
+      throw new Error('The demo seed lacks the Tarnwick customer or a lab manager');
+    }
+    const newPassword = 'Saffron-Kettle-Moorland-29';
+
+    let page = await browser.freshPage();
+    await page.goto(`${api.baseUrl}/sign-in`);
+    await page.getByRole('link', { name: 'Forgotten your password?' }).click();
+    await page.getByLabel('E-mail').fill(customer.email);
+    await page.getByRole('button', { name: 'Send link' }).click();
+    await page.getByText('If an account uses that address').waitFor();
+
+    // Demo mode: the lab manager's dev mailbox shows what was sent.
+    page = await browser.freshPage();
+    await signIn(page, api.baseUrl, manager.email);
+    await page.goto(`${api.baseUrl}/dev-mailbox`);
+    const message = page.locator('mat-expansion-panel').filter({ hasText: customer.email }).first();
+    await message.waitFor();
+    const link = await message.locator('.links a').first().getAttribute('href');
+    expect(link).toMatch(/\/reset-password\?token=/);
+
+    page = await browser.freshPage();
+    await page.goto(link ?? '');
+    await page.getByRole('heading', { name: 'Choose a new password' }).waitFor();
+    await page.getByLabel('New password').fill(newPassword);
+    await page.getByLabel('Repeat the password').fill('Saffron-Kettle-Moorland-30');
+    await page.getByRole('button', { name: 'Change password' }).click();
+    await page.getByText('The two passwords are not the same').waitFor();
+    await page.getByLabel('Repeat the password').fill(newPassword);
+    await page.getByRole('button', { name: 'Change password' }).click();
+    await page.getByText('Your password has been changed').waitFor();
+
+    await signIn(page, api.baseUrl, customer.email, newPassword);
+    await page.getByRole('button', { name: 'Account menu' }).click();
+    await page.getByRole('menuitem', { name: 'Profile' }).click();
+    await page.getByRole('heading', { name: 'Your profile' }).waitFor();
+    await page.getByLabel('Name').fill('Tobias R. Enderby');
+    await page.getByRole('button', { name: 'Save name' }).click();
+    await page.getByText('Your name has been saved.').waitFor();
+    await expect.poll(() => page.getByRole('button', { name: 'Account menu' }).innerText()).toContain('Tobias R. Enderby');
+  });
+});
