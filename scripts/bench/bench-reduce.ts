@@ -54,25 +54,52 @@ async function plainRead(path: string): Promise<number> {
   return bytes;
 }
 
-async function timed<T>(work: () => Promise<T>): Promise<[T, number]> {
+/** Wall time and CPU time (user + system) of one piece of work, s. CPU time is steadier on a shared machine. */
+async function timed<T>(work: () => Promise<T>): Promise<[T, number, number]> {
+  const cpu = process.cpuUsage();
   const start = process.hrtime.bigint();
   const value = await work();
-  return [value, Number(process.hrtime.bigint() - start) / 1e9];
+  const wall = Number(process.hrtime.bigint() - start) / 1e9;
+  const used = process.cpuUsage(cpu);
+  return [value, wall, (used.user + used.system) / 1e6];
 }
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+const ROUNDS = 3;
 
 const rows = process.argv[2] ? Number(process.argv[2]) : 1_000_000;
 const path = join(tmpdir(), `tunnelwright-bench-reduce-${rows}.csv`);
 if (!existsSync(path)) await generate(path, rows);
 const size = statSync(path).size;
 console.log(`file ${path}: ${rows} rows, ${(size / 1e6).toFixed(1)} MB; ${cpus()[0]?.model ?? 'cpu'} ×${cpus().length}, node ${process.version}`);
-await plainRead(path); // warm the page cache so both timings read from memory
-const [, plainSeconds] = await timed(() => plainRead(path));
-// The reader alone, for scale: the part of the reduction that is parsing.
-const [, readerSeconds] = await timed(() => readRunFile(createReadStream(path, { highWaterMark: 1 << 20 }), { fileName: path, onSample: () => undefined }));
-const [result, reduceSeconds] = await timed(() => reduceRun(createReadStream(path, { highWaterMark: 1 << 20 }), config, { fileName: path }));
-if (result.sampleCount !== rows) throw new Error(`bench-reduce: reduced ${result.sampleCount} rows, expected ${rows}`);
-console.log(`plain read: ${plainSeconds.toFixed(3)} s (${(size / 1e6 / plainSeconds).toFixed(0)} MB/s)`);
-console.log(`readRunFile alone: ${readerSeconds.toFixed(3)} s (${(rows / readerSeconds / 1e6).toFixed(3)} M rows/s)`);
-console.log(`reduceRun:  ${reduceSeconds.toFixed(3)} s, ${(rows / reduceSeconds / 1e6).toFixed(3)} M rows/s, ${result.points.length} points`);
-console.log(`ratio reduction / plain read: ${(reduceSeconds / plainSeconds).toFixed(2)}× (target ≤ 3×); reduction / reader alone: ${(reduceSeconds / readerSeconds).toFixed(2)}×`);
-console.log(`peak RSS: ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (target ≤ 150 MB)`);
+await plainRead(path); // warm the page cache so every timing reads from memory
+const plain: number[][] = [];
+const reader: number[][] = [];
+const reduce: number[][] = [];
+let points = 0;
+let firstRoundRss = 0;
+for (let round = 1; round <= ROUNDS; round++) {
+  const [, plainWall, plainCpu] = await timed(() => plainRead(path));
+  // The reader alone, for scale: the part of the reduction that is parsing.
+  const [, readerWall, readerCpu] = await timed(() => readRunFile(createReadStream(path, { highWaterMark: 1 << 20 }), { fileName: path, onSample: () => undefined }));
+  const [result, reduceWall, reduceCpu] = await timed(() => reduceRun(createReadStream(path, { highWaterMark: 1 << 20 }), config, { fileName: path }));
+  if (result.sampleCount !== rows) throw new Error(`bench-reduce: reduced ${result.sampleCount} rows, expected ${rows}`);
+  points = result.points.length;
+  if (round === 1) firstRoundRss = process.resourceUsage().maxRSS / 1024;
+  plain.push([plainWall, plainCpu]);
+  reader.push([readerWall, readerCpu]);
+  reduce.push([reduceWall, reduceCpu]);
+  console.log(
+    `round ${round}: plain read ${plainWall.toFixed(3)} s wall / ${plainCpu.toFixed(3)} s CPU | readRunFile ${readerWall.toFixed(3)} / ${readerCpu.toFixed(3)} | ` +
+      `reduceRun ${reduceWall.toFixed(3)} / ${reduceCpu.toFixed(3)}`,
+  );
+}
+const [plainWall, plainCpu] = [median(plain.map((x) => x[0])), median(plain.map((x) => x[1]))];
+const [readerWall, readerCpu] = [median(reader.map((x) => x[0])), median(reader.map((x) => x[1]))];
+const [reduceWall, reduceCpu] = [median(reduce.map((x) => x[0])), median(reduce.map((x) => x[1]))];
+console.log(`median of ${ROUNDS} rounds (wall / CPU):`);
+console.log(`  plain read:        ${plainWall.toFixed(3)} s / ${plainCpu.toFixed(3)} s (${(size / 1e6 / plainWall).toFixed(0)} MB/s)`);
+console.log(`  readRunFile alone: ${readerWall.toFixed(3)} s / ${readerCpu.toFixed(3)} s (${(rows / readerWall / 1e6).toFixed(3)} M rows/s)`);
+console.log(`  reduceRun:         ${reduceWall.toFixed(3)} s / ${reduceCpu.toFixed(3)} s (${(rows / reduceWall / 1e6).toFixed(3)} M rows/s, ${points} points)`);
+console.log(`  ratio reduction / plain read: ${(reduceWall / plainWall).toFixed(2)}× wall (target ≤ 3×); reduction / reader alone: ${(reduceWall / readerWall).toFixed(2)}× wall, ${(reduceCpu / readerCpu).toFixed(2)}× CPU`);
+console.log(`  peak RSS after one plain read, one read and one reduction: ${firstRoundRss.toFixed(0)} MB (target ≤ 150 MB); after all rounds: ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB`);

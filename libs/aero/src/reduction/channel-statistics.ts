@@ -39,6 +39,7 @@ export class ChannelStatistics {
   push(values: ArrayLike<number>): void {
     const { means, sums, channels } = this;
     const n = ++this.count;
+    const weight = 1 / n;
     for (let i = 0; i < channels; i++) {
       const x = values[i];
       if (!Number.isFinite(x)) {
@@ -46,7 +47,7 @@ export class ChannelStatistics {
         throw new AeroInputError('NOT_FINITE', `\`ChannelStatistics.push\` requires finite values; got ${x} in channel ${i}`);
       }
       const delta = x - means[i];
-      means[i] += delta / n;
+      means[i] += delta * weight;
       sums[i] += delta * (x - means[i]);
     }
   }

@@ -28,6 +28,8 @@ export class SampleReducer {
   private readonly loads = new Float64Array(6);
   private readonly bridges = new Float64Array(6);
   private readonly tareLoads = new Float64Array(6);
+  private tareYaw = NaN;
+  private tarePitch = NaN;
   private readonly wind = new Float64Array(3);
   private readonly airState = { pressure: NaN, temperature: NaN, relativeHumidity: NaN };
   private density = NaN;
@@ -147,7 +149,12 @@ export class SampleReducer {
     if (capacities) for (let i = 0; i < 6; i++) if (Math.abs(loads[i]) > capacities[i]) over = true;
     this.overCapacity = over;
     if (this.tare) {
-      interpolateTare(this.tare, sample.yaw, sample.pitch, this.tareLoads);
+      if (sample.yaw !== this.tareYaw || sample.pitch !== this.tarePitch) {
+        // Setpoints hold still within a point, so the tare is looked up only when the attitude changes.
+        interpolateTare(this.tare, sample.yaw, sample.pitch, this.tareLoads);
+        this.tareYaw = sample.yaw;
+        this.tarePitch = sample.pitch;
+      }
       for (let i = 0; i < 6; i++) loads[i] -= this.tareLoads[i];
     }
   }
