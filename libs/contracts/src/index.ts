@@ -7,3 +7,5 @@ export * from './audit';
 export * from './mailbox';
 export * from './paging';
 export * from './ingest';
+export * from './planner';
+export * from './booking';
