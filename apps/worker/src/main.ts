@@ -1,8 +1,9 @@
 /**
  * The Tunnelwright background worker: `node --import tsx apps/worker/src/main.ts`.
- * Reads REDIS_URL (default redis://127.0.0.1:63790) and DATABASE_URL (default the local demo database).
+ * Reads REDIS_URL (default redis://127.0.0.1:63790), DATABASE_URL (default the local demo database) and
+ * QUEUE_PREFIX (BullMQ key prefix shared with the API, default `bull`).
  */
-import { defaultDatabaseUrl } from '@tunnelwright/db';
+import { defaultDatabaseUrl, queuePrefix } from '@tunnelwright/db';
 import { logger } from './logger';
 import { startWorker } from './start-worker';
 
@@ -10,6 +11,7 @@ const running = await startWorker({
   redisUrl: process.env.REDIS_URL ?? 'redis://127.0.0.1:63790',
   databaseUrl: process.env.DATABASE_URL ?? defaultDatabaseUrl,
   logger,
+  prefix: queuePrefix(),
 });
 
 let stopping = false;
