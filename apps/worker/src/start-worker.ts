@@ -11,7 +11,7 @@ export interface WorkerOptions {
   redisUrl: string;
   databaseUrl: string;
   logger: Logger;
-  /** BullMQ key prefix (default `bull`); tests use their own so they never meet another run's jobs. */
+  /** BullMQ key prefix shared with the API (default `bull`); tests use their own so they never meet another run's jobs. */
   prefix?: string;
   /** Interval of the token purge, in milliseconds (default hourly). */
   purgeEveryMs?: number;
