@@ -180,6 +180,13 @@ describe('/api/invitations and the public invitation and reset links', () => {
       expect(response.status).toBe(202);
     });
 
+    it('repeated requests for one address → 429 after five', async () => {
+      const email = `flood-${fixtures.unique()}@example.com`;
+      const statuses: number[] = [];
+      for (let i = 0; i < 6; i += 1) statuses.push((await request(t.app).post('/api/auth/forgot-password').send({ email })).status);
+      expect(statuses).toEqual([202, 202, 202, 202, 202, 429]);
+    });
+
     it('expired reset link → 410', async () => {
       const token = await fixtures.passwordResetToken();
       await t.knex('user_tokens').where({ purpose: 'password_reset' }).whereNull('usedAt').update({ expiresAt: new Date(Date.now() - 1000) });
