@@ -1,0 +1,137 @@
+import { parseReductionConfig, reduceRun, ReductionConfigError, ReductionError, RunFileError, type PointResult, type ReductionResult } from '@tunnelwright/aero';
+import { RawFile, RawObjectMissingError, Reduction, type RawStore } from '@tunnelwright/db';
+import type { Knex } from 'knex';
+
+/** How often progress is written to the reduction row and the job, ms. */
+const progressEveryMs = 250;
+/** Points inserted per statement. */
+const pointBatch = 500;
+
+/** Why a reduction can never succeed, whatever the number of retries: bad file, bad configuration, lost bytes. */
+export interface ReductionFailure {
+  code: string;
+  message: string;
+  line: number | null;
+  column: number | null;
+  issues?: unknown[];
+}
+
+/** What one attempt at a reduction ended with. */
+export type ReductionOutcome = { kind: 'done'; points: number } | { kind: 'skipped'; state: string } | { kind: 'failed'; failure: ReductionFailure };
+
+/** Maps an error of bad input to the failure recorded on the reduction; anything else is transient (undefined). */
+export function failureOf(error: unknown): ReductionFailure | undefined {
+  if (error instanceof RunFileError) {
+    const first = error.issues[0];
+    return { code: first?.code ?? 'INVALID_FILE', message: error.message, line: first?.line ?? null, column: first?.column ?? null, issues: error.issues };
+  }
+  if (error instanceof ReductionError) return { code: error.code, message: error.message, line: error.line, column: error.column };
+  if (error instanceof ReductionConfigError) return { code: error.code, message: error.message, line: null, column: null, issues: error.issues };
+  if (error instanceof RawObjectMissingError) return { code: 'RAW_FILE_MISSING', message: error.message, line: null, column: null };
+  return undefined;
+}
+
+function numberOrNull(value: number | undefined): number | null {
+  return value === undefined || !Number.isFinite(value) ? null : value;
+}
+
+/** The row of one point: key figures as columns, the whole engine result as JSON. */
+function pointRow(reductionId: string, index: number, p: PointResult) {
+  return {
+    reductionId,
+    index,
+    pointNumber: p.point,
+    sampleCount: p.sampleCount,
+    yaw: p.yaw,
+    pitch: p.pitch,
+    dynamicPressure: numberOrNull(p.correctedDynamicPressure),
+    speed: numberOrNull(p.correctedSpeed),
+    reynoldsNumber: numberOrNull(p.reynoldsNumber),
+    cdUncorrected: numberOrNull(p.uncorrected.dragCoefficient.value),
+    cdCorrected: numberOrNull(p.corrected.dragCoefficient.value),
+    clCorrected: numberOrNull(p.corrected.liftCoefficient.value),
+    csCorrected: numberOrNull(p.corrected.sideForceCoefficient.value),
+    dragCounts: numberOrNull(p.dragCounts),
+    setpoints: JSON.stringify({ yaw: p.yaw, pitch: p.pitch }),
+    result: JSON.stringify(p),
+  };
+}
+
+/** Writes every point and marks the reduction done, in one transaction; a retry after a crash inserts nothing twice. */
+async function saveResult(knex: Knex, reduction: Reduction, result: ReductionResult): Promise<number> {
+  return knex.transaction(async (trx) => {
+    const rows = result.points.map((p, index) => pointRow(reduction.id, index, p));
+    for (let i = 0; i < rows.length; i += pointBatch) {
+      await trx('reduction_points').insert(rows.slice(i, i + pointBatch)).onConflict(['reductionId', 'index']).ignore();
+    }
+    const { points: _points, config: _config, ...summary } = result;
+    await Reduction.query(trx)
+      .patch({ state: 'done', progress: 1, engineVersion: result.engineVersion, warnings: result.warnings, summary: summary as unknown as Record<string, unknown>, finishedAt: new Date(), errorCode: null, errorMessage: null, errorLine: null, errorColumn: null })
+      .where('id', reduction.id);
+    return rows.length;
+  });
+}
+
+/** Records a failure that no retry can fix. */
+export async function recordFailure(knex: Knex, reductionId: string, failure: ReductionFailure): Promise<void> {
+  await Reduction.query(knex)
+    .patch({
+      state: 'failed',
+      errorCode: failure.code,
+      errorMessage: failure.message.slice(0, 4000),
+      errorLine: failure.line,
+      errorColumn: failure.column,
+      summary: failure.issues ? { issues: failure.issues } : null,
+      finishedAt: new Date(),
+    })
+    .where('id', reductionId)
+    .whereNot('state', 'done');
+}
+
+/**
+ * Runs one reduction: streams its raw file from the store through the engine, reporting progress, then
+ * writes the points and the result in one transaction. Idempotent: a reduction already done or failed for
+ * bad input is left alone. Bad input is recorded on the reduction and returned as `failed`; any other
+ * error is thrown, so the queue retries it.
+ *
+ * @param report called with the fraction 0–1 read so far, at most every 250 ms
+ */
+export async function runReduction(knex: Knex, store: RawStore, reductionId: string, report: (fraction: number) => Promise<void> | void): Promise<ReductionOutcome> {
+  const reduction = await Reduction.query(knex).findById(reductionId);
+  if (!reduction) return { kind: 'failed', failure: { code: 'REDUCTION_MISSING', message: `reduction ${reductionId} does not exist`, line: null, column: null } };
+  if (reduction.state === 'done' || reduction.state === 'failed') return { kind: 'skipped', state: reduction.state };
+  const rawFile = await RawFile.query(knex).findById(reduction.rawFileId);
+  if (!rawFile) return { kind: 'failed', failure: { code: 'RAW_FILE_MISSING', message: `raw file ${reduction.rawFileId} is not recorded`, line: null, column: null } };
+
+  await Reduction.query(knex).patch({ state: 'running', startedAt: reduction.startedAt ?? new Date() }).where('id', reduction.id);
+  let lastReport = 0;
+  let pending: Promise<unknown> = Promise.resolve();
+  const onProgress = (bytesRead: number) => {
+    const now = Date.now();
+    if (now - lastReport < progressEveryMs) return;
+    lastReport = now;
+    // The row never claims completion before the points are written.
+    const fraction = Math.min(0.99, rawFile.size > 0 ? bytesRead / rawFile.size : 0);
+    pending = pending.then(() => Promise.all([Reduction.query(knex).patch({ progress: fraction }).where('id', reduction.id).where('state', 'running'), report(fraction)])).catch(() => undefined);
+  };
+  try {
+    const config = parseReductionConfig(reduction.config, `reduction ${reduction.version} configuration`);
+    const input = await store.get(rawFile.storageKey);
+    const result = await reduceRun(input, config, { fileName: rawFile.originalName, onProgress });
+    await pending;
+    if (result.inputSha256 !== rawFile.sha256) {
+      const failure = { code: 'RAW_FILE_CHANGED', message: `the stored bytes hash to ${result.inputSha256}, not ${rawFile.sha256} as recorded at upload`, line: null, column: null };
+      await recordFailure(knex, reduction.id, failure);
+      return { kind: 'failed', failure };
+    }
+    const points = await saveResult(knex, reduction, result);
+    await report(1);
+    return { kind: 'done', points };
+  } catch (error) {
+    await pending;
+    const failure = failureOf(error);
+    if (!failure) throw error;
+    await recordFailure(knex, reduction.id, failure);
+    return { kind: 'failed', failure };
+  }
+}
