@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -9,6 +9,7 @@ import { problemMessage, problemStatus } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { AccountApi } from './account-api';
 import { AuthFrame } from './auth-frame';
+import { focusFirstInvalid } from '../shared/focus-first-invalid';
 
 /** Asks for a password-reset e-mail. The answer is the same whether or not the address has an account. */
 @Component({
@@ -68,6 +69,7 @@ import { AuthFrame } from './auth-frame';
   `,
 })
 export class ForgotPasswordPage {
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly api = inject(AccountApi);
 
   protected readonly form = inject(NonNullableFormBuilder).group({
@@ -80,6 +82,7 @@ export class ForgotPasswordPage {
   protected submit(): void {
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      focusFirstInvalid(this.host.nativeElement);
       return;
     }
     this.busy.set(true);

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, input, output, signal } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -8,6 +8,7 @@ import { passwordMinLength } from '@tunnelwright/contracts';
 import { debounceTime } from 'rxjs';
 import { matchingPasswords } from './matching-passwords';
 import { PasswordStrength, PasswordStrengthService } from './password-strength';
+import { focusFirstInvalid } from '../shared/focus-first-invalid';
 
 const strengthWords = ['Very weak', 'Weak', 'Fair', 'Strong', 'Very strong'] as const;
 
@@ -20,6 +21,7 @@ const strengthWords = ['Very weak', 'Weak', 'Fair', 'Strong', 'Very strong'] as 
   styleUrl: './new-password-form.scss',
 })
 export class NewPasswordForm {
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly strength = inject(PasswordStrengthService);
 
   /** Label of the submit button. */
@@ -74,6 +76,7 @@ export class NewPasswordForm {
   protected submit(): void {
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      focusFirstInvalid(this.host.nativeElement);
       return;
     }
     this.submitted.emit(this.form.controls.password.value);

@@ -35,6 +35,7 @@ describe('SignInPage', () => {
     await (await signInButton()).click();
     expect(await (await field('E-mail')).getTextErrors()).toEqual(['Enter your e-mail address']);
     expect(await (await field('Password')).getTextErrors()).toEqual(['Enter your password']);
+    expect(document.activeElement).toBe(host.querySelector('input[type=email]'));
     backend.expectNone('/api/auth/login');
   });
 

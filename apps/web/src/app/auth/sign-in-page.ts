@@ -1,5 +1,5 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, inject, input, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -11,6 +11,7 @@ import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { AuthFrame } from './auth-frame';
 import { retryAfterText } from './retry-after-text';
+import { focusFirstInvalid } from '../shared/focus-first-invalid';
 
 /** E-mail and password sign-in. */
 @Component({
@@ -43,6 +44,7 @@ import { retryAfterText } from './retry-after-text';
   `,
 })
 export class SignInPage {
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly auth = inject(AuthService);
   private readonly router = inject(Router);
 
@@ -59,6 +61,7 @@ export class SignInPage {
   protected submit(): void {
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      focusFirstInvalid(this.host.nativeElement);
       return;
     }
     this.busy.set(true);

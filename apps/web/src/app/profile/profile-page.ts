@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
@@ -12,6 +12,7 @@ import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { ChangePasswordForm } from './change-password-form';
 import { ProfileApi } from './profile-api';
+import { focusFirstInvalid } from '../shared/focus-first-invalid';
 
 /** The signed-in user's name, and a way to change their password. */
 @Component({
@@ -49,6 +50,7 @@ import { ProfileApi } from './profile-api';
   `,
 })
 export class ProfilePage {
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly auth = inject(AuthService);
   private readonly api = inject(ProfileApi);
   private readonly snackBar = inject(MatSnackBar);
@@ -67,6 +69,7 @@ export class ProfilePage {
   protected save(): void {
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      focusFirstInvalid(this.host.nativeElement);
       return;
     }
     this.busy.set(true);

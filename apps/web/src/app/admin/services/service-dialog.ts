@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
 import { FormControl, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
@@ -13,6 +13,7 @@ import { ErrorBanner } from '../../shared/error-banner';
 import { fromMinorUnits, toMinorUnits } from '../../shared/money';
 import { numberErrorText } from '../../shared/number-error-text';
 import { serviceUnitLabels } from '../../shared/service-unit-labels';
+import { focusFirstInvalid } from '../../shared/focus-first-invalid';
 
 /** What the service dialog needs: the service being edited (or null) and the tunnels it may be tied to. */
 export interface ServiceDialogData {
@@ -47,6 +48,7 @@ export interface ServiceDialogData {
   `,
 })
 export class ServiceDialog {
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly api = inject(CatalogueApi);
   private readonly dialogRef = inject<MatDialogRef<ServiceDialog, Service>>(MatDialogRef);
   private readonly data = inject<ServiceDialogData>(MAT_DIALOG_DATA);
@@ -73,6 +75,7 @@ export class ServiceDialog {
     this.form.controls.currency.setValue(this.form.controls.currency.value.trim().toUpperCase());
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      focusFirstInvalid(this.host.nativeElement);
       return;
     }
     const value = this.form.getRawValue();

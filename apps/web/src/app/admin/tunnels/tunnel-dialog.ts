@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -14,6 +14,7 @@ import { ErrorBanner } from '../../shared/error-banner';
 import { numberErrorText } from '../../shared/number-error-text';
 import { tunnelKindLabels } from '../../shared/tunnel-kind-labels';
 import { buildTunnelForm, tunnelInputFrom } from './tunnel-form';
+import { focusFirstInvalid } from '../../shared/focus-first-invalid';
 
 /** Creates a tunnel, or edits the one passed in. Closes with the saved tunnel. */
 @Component({
@@ -50,6 +51,7 @@ import { buildTunnelForm, tunnelInputFrom } from './tunnel-form';
   `,
 })
 export class TunnelDialog {
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly api = inject(CatalogueApi);
   private readonly dialogRef = inject<MatDialogRef<TunnelDialog, Tunnel>>(MatDialogRef);
 
@@ -73,6 +75,7 @@ export class TunnelDialog {
   protected save(): void {
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      focusFirstInvalid(this.host.nativeElement);
       return;
     }
     const input = tunnelInputFrom(this.form, this.tunnel ?? undefined);

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, signal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -11,6 +11,7 @@ import { roleLabels, staffRoles, type Role } from '@tunnelwright/contracts';
 import { problemFieldErrors, problemMessage } from '../../core/problem-message';
 import { ErrorBanner } from '../../shared/error-banner';
 import { UsersApi } from './users-api';
+import { focusFirstInvalid } from '../../shared/focus-first-invalid';
 
 /** Invites a person by e-mail; the role choices follow the kind of organisation chosen. Closes with the address. */
 @Component({
@@ -37,6 +38,7 @@ import { UsersApi } from './users-api';
   `,
 })
 export class InviteDialog {
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly api = inject(UsersApi);
   private readonly dialogRef = inject<MatDialogRef<InviteDialog, string>>(MatDialogRef);
 
@@ -82,6 +84,7 @@ export class InviteDialog {
   protected send(): void {
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      focusFirstInvalid(this.host.nativeElement);
       return;
     }
     const { email, name, organisationId, role } = this.form.getRawValue();
