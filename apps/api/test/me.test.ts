@@ -41,13 +41,19 @@ describe('/api/me', () => {
   });
 
   describe('POST /password', () => {
-    it('right current password, strong new one → 204 and the new password signs in', async () => {
+    it('right current password, strong new one → 204, the new password signs in, other sessions end, this one goes on', async () => {
       const user = await fixtures.user({ role: 'technician' });
+      const elsewhere = await request(t.app).post('/api/auth/login').send({ email: user.email, password: fixturePassword });
+      const otherCookie = ([] as string[]).concat(elsewhere.headers['set-cookie'] ?? [])[0]?.split(';')[0] ?? '';
       const response = await request(t.app)
         .post('/api/me/password')
         .set('Authorization', `Bearer ${user.token}`)
         .send({ currentPassword: fixturePassword, newPassword: 'Halyard-Quince-Bellows-91' });
       expect(response.status).toBe(204);
+      expect((await request(t.app).post('/api/auth/refresh').set('Cookie', otherCookie)).status).toBe(401);
+      const ownCookie = ([] as string[]).concat(response.headers['set-cookie'] ?? [])[0] ?? '';
+      expect(ownCookie).toMatch(/tw_refresh=.+Path=\/api\/auth/);
+      expect((await request(t.app).post('/api/auth/refresh').set('Cookie', ownCookie.split(';')[0] ?? '')).status).toBe(200);
       expect((await request(t.app).post('/api/auth/login').send({ email: user.email, password: 'Halyard-Quince-Bellows-91' })).status).toBe(200);
     });
 

@@ -1,6 +1,7 @@
 import { changePasswordSchema, updateProfileSchema } from '@tunnelwright/contracts';
 import { recordAudit, User } from '@tunnelwright/db';
 import { hashPassword, verifyPassword } from '../auth/passwords';
+import { issueRefreshToken, revokeAllRefreshTokens, setRefreshCookie } from '../auth/refresh-tokens';
 import { toSessionUser } from '../auth/session-user';
 import { HttpError } from '../errors/http-error';
 import { assertStrongPassword } from './auth';
@@ -38,7 +39,7 @@ export const meRoutes: RouteDef[] = [
     method: 'post',
     path: '/password',
     access: 'authenticated',
-    summary: 'Change my password',
+    summary: 'Change my password (ends every other session)',
     body: changePasswordSchema,
     sample: { body: (f) => ({ currentPassword: f.password, newPassword: f.password }), expect: 204 },
     handler: async ({ caller, body, res, deps }) => {
@@ -47,10 +48,14 @@ export const meRoutes: RouteDef[] = [
       }
       assertStrongPassword(body.newPassword, caller, 'newPassword');
       const passwordHash = await hashPassword(body.newPassword);
-      await deps.knex.transaction(async (trx) => {
+      const refresh = await deps.knex.transaction(async (trx) => {
         await User.query(trx).patchAndFetchById(caller.id, { passwordHash });
+        // Other browsers signed in with the old password lose their sessions; this one gets a fresh cookie.
+        await revokeAllRefreshTokens(trx, caller.id);
         await recordAudit(trx, { actorId: caller.id, action: 'user.password_changed', entity: 'user', entityId: caller.id });
+        return issueRefreshToken(trx, caller.id);
       });
+      setRefreshCookie(res, deps.config.publicUrl, refresh);
       res.status(204).end();
     },
   }),
