@@ -9,6 +9,7 @@ export * from './sample-reducer';
 export * from './channel-statistics';
 export * from './point-accumulator';
 export * from './finish-point';
-export * from './full-scale';
+export * from './add-full-scale';
+export * from './wind-averaged-drag';
 export * from './reduce-run';
 export * from './format-result-csv';

@@ -10,7 +10,8 @@ import { ReductionError } from './reduction-error';
 import type { ReductionResult } from './reduction-result';
 import type { ReductionWarning } from './reduction-warning';
 import { SampleReducer } from './sample-reducer';
-import { addFullScale, windAveragedDrag } from './full-scale';
+import { addFullScale } from './add-full-scale';
+import { windAveragedDrag } from './wind-averaged-drag';
 
 /** Options of `reduceRun`. */
 export interface ReduceRunOptions {
