@@ -5,6 +5,8 @@ export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
+  /** Files sent along, e.g. a calendar invitation (`text/calendar; method=REQUEST`). */
+  attachments?: { filename: string; content: string; contentType: string }[];
 }
 
 /** Sends mail; the app only depends on this shape, so tests and the demo use the same SMTP fake. */
@@ -18,7 +20,7 @@ export function createSmtpMailer(smtpUrl: string, from: string): Mailer {
   const transport = nodemailer.createTransport(smtpUrl);
   return {
     async send(mail) {
-      await transport.sendMail({ from, to: mail.to, subject: mail.subject, text: mail.text });
+      await transport.sendMail({ from, to: mail.to, subject: mail.subject, text: mail.text, attachments: mail.attachments });
     },
     close() {
       transport.close();
