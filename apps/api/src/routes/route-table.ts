@@ -7,10 +7,12 @@ import { healthRoutes } from './health';
 import { invitationRoutes } from './invitations';
 import { meRoutes } from './me';
 import { organisationRoutes } from './organisations';
+import { planRoutes } from './plans';
 import { reductionRoutes } from './reductions';
 import type { Resource, RouteDef } from './route';
 import { runRoutes } from './runs';
 import { serviceRoutes } from './services';
+import { shapeRoutes } from './shapes';
 import { testRoutes } from './tests';
 import { tunnelRoutes } from './tunnels';
 import { userRoutes } from './users';
@@ -35,6 +37,8 @@ export const resources: Resource[] = [
   { mount: '/api/tests', routes: testRoutes },
   { mount: '/api/runs', routes: runRoutes },
   { mount: '/api/reductions', routes: reductionRoutes },
+  { mount: '/api/shapes', routes: shapeRoutes },
+  { mount: '/api/plans', routes: planRoutes },
 ];
 
 /** One row per route with its full path, as the test matrix reads it. */
