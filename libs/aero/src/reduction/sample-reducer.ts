@@ -35,6 +35,7 @@ export class SampleReducer {
   private density = NaN;
   private viscosity = NaN;
   private soundSpeed = NaN;
+  private kinematic = NaN;
 
   /**
    * @param config - the parsed configuration
@@ -95,6 +96,7 @@ export class SampleReducer {
       this.density = airDensity(config.densityModel, air);
       this.viscosity = sutherlandViscosity(air.temperature);
       this.soundSpeed = speedOfSound(air.temperature);
+      this.kinematic = kinematicViscosity(this.viscosity, this.density);
       this.outsideCipmValidity = config.densityModel === 'cipm-2007' && !isWithinCipmValidity(air);
     }
     const rho = this.density;
@@ -108,7 +110,7 @@ export class SampleReducer {
     v[C.relativeHumidity] = air.relativeHumidity;
     v[C.density] = rho;
     v[C.viscosity] = mu;
-    v[C.kinematicViscosity] = kinematicViscosity(mu, rho);
+    v[C.kinematicViscosity] = this.kinematic;
     v[C.speedOfSound] = this.soundSpeed;
     v[C.dynamicPressure] = q;
     v[C.speed] = speed;
