@@ -56,7 +56,7 @@ describe('reduceRun', () => {
     expect(DESIGN_CAUTION).toMatch(/not design loads/);
   });
 
-  it('warns with codes: blockage over 7.5 % (BRP rule of thumb), Mach over 0.3, few samples, over capacity, CIPM range', async () => {
+  it('warns with codes: blockage over 7.5 % (BRP rule of thumb, attribution from memory), Mach over 0.3 (common practice), few samples, over capacity, CIPM range (Picard 2008)', async () => {
     const result = await reduce(['0.0, 1, 0, 0, 70000, 1013.25, 30, 50, 600, 0, 10, 0, 0, 0'], {
       article: { referenceArea: 0.32, referenceAreaKind: 'frontal', referenceLength: 1 },
       balance: { capacities: [500, 500, 500, 50, 50, 50] },
@@ -67,7 +67,7 @@ describe('reduceRun', () => {
     expect(codes).toEqual(['BLOCKAGE_OVER_7_5', 'CIPM_OUT_OF_VALIDITY', 'FEW_SAMPLES', 'LOAD_OVER_CAPACITY', 'MACH_OVER_0_3']);
   });
 
-  it('warns BLOCKAGE_OVER_10 above 10 % and BLOCKAGE_UNKNOWN without a frontal area', async () => {
+  it('warns BLOCKAGE_OVER_10 above 10 % (classical corrections doubtful; common practice, from memory) and BLOCKAGE_UNKNOWN without a frontal area', async () => {
     const big = await reduce([ROW(1, 600)], { article: { referenceArea: 0.5, referenceAreaKind: 'frontal', referenceLength: 1 } });
     expect(big.warnings.map((w) => w.code)).toEqual(['BLOCKAGE_OVER_10']);
     const unknown = await reduce([ROW(1, 600)], { article: { referenceArea: 0.5, referenceAreaKind: 'planform', referenceLength: 1 } });
