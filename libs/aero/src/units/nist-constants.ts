@@ -23,7 +23,7 @@ export const POUND_FORCE = POUND_MASS * STANDARD_GRAVITY;
 export const POUND_FORCE_FOOT = POUND_FORCE * FOOT;
 /** Pound-force per square foot, Pa. */
 export const POUND_FORCE_PER_SQUARE_FOOT = POUND_FORCE / (FOOT * FOOT);
-/** Conventional inch of water (4 °C, 1000 kg/m³ × g_n × 25.4 mm), Pa. NIST SP 811 lists 249.082 Pa for inH2O (39.2 °F). */
+/** Inch of water at 39.2 °F, Pa: NIST SP 811 App. B.8 lists 249.082 Pa. (The conventional inch of water, 1000 kg/m³ × g_n × 25.4 mm, is 249.0889 Pa.) */
 export const INCH_OF_WATER = 249.082;
 /** Horsepower (550 ft·lbf/s), W. */
 export const HORSEPOWER = 550 * POUND_FORCE_FOOT;
