@@ -1,0 +1,70 @@
+import { HttpClient } from '@angular/common/http';
+import { Injectable, inject } from '@angular/core';
+import type { Booking, BookingRequest, BookingSettings, CancellationPreview, PeriodInput, QuoteInput } from '@tunnelwright/contracts';
+import { Observable } from 'rxjs';
+
+/** The lab's booking rules together with its IANA zone. */
+export type LabBookingSettings = BookingSettings & { readonly timeZone: string };
+
+/** Bookings of tunnel time and their life cycle; customers only ever see their own organisation's. */
+@Injectable({ providedIn: 'root' })
+export class BookingApi {
+  private readonly http = inject(HttpClient);
+
+  settings(): Observable<LabBookingSettings> {
+    return this.http.get<LabBookingSettings>('/api/bookings/settings');
+  }
+
+  /** Bookings, soonest first. */
+  list(): Observable<Booking[]> {
+    return this.http.get<Booking[]>('/api/bookings');
+  }
+
+  request(input: BookingRequest): Observable<Booking> {
+    return this.http.post<Booking>('/api/bookings', input);
+  }
+
+  quote(id: string, input: QuoteInput): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/quote`, input);
+  }
+
+  decline(id: string, reason: string): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/decline`, { reason });
+  }
+
+  counterPropose(id: string, period: PeriodInput, note: string): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/counter-proposal`, { ...period, note });
+  }
+
+  acceptCounterProposal(id: string): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/accept-counter-proposal`, {});
+  }
+
+  acceptQuote(id: string): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/accept-quote`, {});
+  }
+
+  rejectQuote(id: string): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/reject-quote`, {});
+  }
+
+  assignTechnician(id: string, technicianId: string | null): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/technician`, { technicianId });
+  }
+
+  start(id: string): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/start`, {});
+  }
+
+  complete(id: string): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/complete`, {});
+  }
+
+  cancellationPreview(id: string): Observable<CancellationPreview> {
+    return this.http.get<CancellationPreview>(`/api/bookings/${id}/cancellation-preview`);
+  }
+
+  cancel(id: string, reason: string, expectedFeeMinor: number): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/cancel`, { reason, expectedFeeMinor });
+  }
+}
