@@ -1,11 +1,14 @@
 import { articleRoutes } from './articles';
 import { auditRoutes } from './audit';
 import { balanceRoutes } from './balances';
+import { bookingRoutes } from './bookings';
 import { authRoutes } from './auth';
 import { devMailboxRoutes } from './dev-mailbox';
 import { healthRoutes } from './health';
 import { invitationRoutes } from './invitations';
+import { maintenanceBlockRoutes } from './maintenance-blocks';
 import { meRoutes } from './me';
+import { occupancyRoutes } from './occupancy';
 import { organisationRoutes } from './organisations';
 import { planRoutes } from './plans';
 import { reductionRoutes } from './reductions';
@@ -29,6 +32,7 @@ export const resources: Resource[] = [
   { mount: '/api/users', routes: userRoutes },
   { mount: '/api/invitations', routes: invitationRoutes },
   { mount: '/api/tunnels', routes: tunnelRoutes },
+  { mount: '/api/tunnels', routes: occupancyRoutes },
   { mount: '/api/services', routes: serviceRoutes },
   { mount: '/api/audit', routes: auditRoutes },
   { mount: '/api/dev', routes: devMailboxRoutes },
@@ -39,6 +43,8 @@ export const resources: Resource[] = [
   { mount: '/api/reductions', routes: reductionRoutes },
   { mount: '/api/shapes', routes: shapeRoutes },
   { mount: '/api/plans', routes: planRoutes },
+  { mount: '/api/bookings', routes: bookingRoutes },
+  { mount: '/api/maintenance-blocks', routes: maintenanceBlockRoutes },
 ];
 
 /** One row per route with its full path, as the test matrix reads it. */
