@@ -8,6 +8,7 @@ import argon2 from 'argon2';
 import { createKnex, migrationConfig, Organisation, recordAudit, Service, Tunnel, User } from '@tunnelwright/db';
 import { demoServices, demoTunnels } from './seed/catalogue';
 import { demoCustomers, demoLab, demoPassword, demoUsers } from './seed/demo-users';
+import { seedPlans } from './seed/plans';
 
 async function ensureOrganisation(trx: Knex.Transaction, name: string, kind: 'lab' | 'customer', created: string[]): Promise<Organisation> {
   // There is exactly one lab; if the database already has one (under any name) it is the demo lab.
@@ -55,6 +56,8 @@ async function seed(knex: Knex): Promise<string[]> {
       await Service.query(trx).insert({ ...service, tunnelId: tunnel ? (tunnelIds.get(tunnel) ?? null) : null });
       created.push(`service ${service.name}`);
     }
+
+    await seedPlans(trx, created);
 
     if (created.length > 0) {
       await recordAudit(trx, { actorId: null, action: 'demo.seeded', entity: 'system', entityId: null, after: { created } });

@@ -38,6 +38,12 @@ export const routes: Routes = [
         loadComponent: () => import('./catalogue/catalogue-page').then((m) => m.CataloguePage),
       },
       {
+        path: 'planner',
+        title: 'Test planner · Tunnelwright',
+        canActivate: [roleGuard(['customer', 'analyst', 'lab_manager'])],
+        loadComponent: () => import('./planner/planner-page').then((m) => m.PlannerPage),
+      },
+      {
         path: 'profile',
         title: 'Your profile · Tunnelwright',
         loadComponent: () => import('./profile/profile-page').then((m) => m.ProfilePage),

@@ -7,12 +7,16 @@ describe('navItemsFor', () => {
     expect(navItemsFor(null, true)).toEqual([]);
   });
 
-  it.each(['customer', 'technician', 'analyst'] as const)('shows a %s only the catalogue', (role) => {
-    expect(labels(role, true)).toEqual(['Catalogue']);
+  it('shows a technician only the catalogue', () => {
+    expect(labels('technician', true)).toEqual(['Catalogue']);
+  });
+
+  it.each(['customer', 'analyst'] as const)('shows a %s the catalogue and the test planner', (role) => {
+    expect(labels(role, true)).toEqual(['Catalogue', 'Test planner']);
   });
 
   it('shows a lab manager the administration sections and, in demo mode, the dev mailbox', () => {
-    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Users', 'Tunnels', 'Services', 'Audit log', 'Dev mailbox']);
+    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Users', 'Tunnels', 'Services', 'Audit log', 'Dev mailbox']);
   });
 
   it('hides the dev mailbox when demo mode is off', () => {

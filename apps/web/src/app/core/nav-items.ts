@@ -11,14 +11,16 @@ export interface NavItem {
 }
 
 const catalogue: NavItem = { label: 'Catalogue', path: '/catalogue', icon: 'view_list' };
+const planner: NavItem = { label: 'Test planner', path: '/planner', icon: 'architecture' };
 
 /** Which sections each role may open, in the order they are listed. */
 export const navItemsByRole: Readonly<Record<Role, readonly NavItem[]>> = {
-  customer: [catalogue],
+  customer: [catalogue, planner],
   technician: [catalogue],
-  analyst: [catalogue],
+  analyst: [catalogue, planner],
   lab_manager: [
     catalogue,
+    planner,
     { label: 'Users', path: '/admin/users', icon: 'group' },
     { label: 'Tunnels', path: '/admin/tunnels', icon: 'air' },
     { label: 'Services', path: '/admin/services', icon: 'sell' },
