@@ -5,9 +5,16 @@
  */
 import { defaultDatabaseUrl, queuePrefix } from '@tunnelwright/db';
 import { logger } from './logger';
+import { startReductionWorker } from './reductions/start-reduction-worker';
 import { startWorker } from './start-worker';
 
 const running = await startWorker({
+  redisUrl: process.env.REDIS_URL ?? 'redis://127.0.0.1:63790',
+  databaseUrl: process.env.DATABASE_URL ?? defaultDatabaseUrl,
+  logger,
+  prefix: queuePrefix(),
+});
+const reductions = await startReductionWorker({
   redisUrl: process.env.REDIS_URL ?? 'redis://127.0.0.1:63790',
   databaseUrl: process.env.DATABASE_URL ?? defaultDatabaseUrl,
   logger,
@@ -20,7 +27,7 @@ async function shutDown(signal: string): Promise<void> {
   stopping = true;
   logger.info({ signal }, 'stopping: letting running jobs finish');
   try {
-    await running.close();
+    await Promise.all([running.close(), reductions.close()]);
     process.exit(0);
   } catch (error) {
     logger.error({ err: error }, 'error while stopping');

@@ -27,7 +27,7 @@ export interface RunningReductionWorker {
   close(): Promise<void>;
 }
 
-const processorFile = fileURLToPath(new URL('./reduction-processor.ts', import.meta.url));
+const processorFile = fileURLToPath(new URL('./reduction-processor-entry.mjs', import.meta.url));
 
 /**
  * Starts consuming the reductions queue with the sandboxed processor, and the outbox dispatcher: once at
