@@ -2,8 +2,8 @@ import type { Knex } from 'knex';
 
 /**
  * Test plans: one row per plan of a customer organisation, and an immutable version row for every save.
- * `booking_id` is a plain uuid with no foreign key yet: the bookings table does not exist when this runs; a later
- * bookings migration adds `plans_booking_id_foreign`. The certified-results link is a measured drag area (m²) with
+ * `booking_id` is created as a plain uuid (written while bookings were still being built); its foreign key is added
+ * by 20261202090000_plans_booking_link. The certified-results link is a measured drag area (m²) with
  * the reference it comes from, both set or both empty.
  */
 export async function up(knex: Knex): Promise<void> {

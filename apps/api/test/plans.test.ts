@@ -229,6 +229,31 @@ describe('/api/plans', () => {
     });
   });
 
+  describe('attached by POST /api/bookings', () => {
+    const bookingBody = async (planId: string) => {
+      const start = new Date(Math.ceil((Date.now() + 70 * 86_400_000) / 3_600_000) * 3_600_000);
+      return {
+        tunnelId: (await fixtures.tunnel()).id,
+        start: start.toISOString(),
+        end: new Date(start.getTime() + 8 * 3_600_000).toISOString(),
+        articles: [{ name: 'Street lamp model', referenceAreaKind: 'frontal' }],
+        planId,
+      };
+    };
+
+    it('own plan → 201 and the plan names the booking; another organisation’s plan → 400 on planId', async () => {
+      const created = await request(t.app).post('/api/plans').set('Authorization', auth(customer)).send({ name: 'For booking', input: threePartInput() });
+      const booking = await request(t.app).post('/api/bookings').set('Authorization', auth(customer)).send(await bookingBody(created.body.id));
+      expect(booking.status).toBe(201);
+      const plan = await request(t.app).get(`/api/plans/${created.body.id}`).set('Authorization', auth(customer));
+      expect(plan.body.bookingId).toBe(booking.body.id);
+
+      const foreign = await request(t.app).post('/api/bookings').set('Authorization', auth(otherCustomer)).send(await bookingBody(created.body.id));
+      expect(foreign.status).toBe(400);
+      expect(foreign.body.errors).toEqual([{ field: 'planId', message: 'Choose one of your saved plans' }]);
+    });
+  });
+
   describe('organisation privacy', () => {
     it('a customer of another organisation gets 404 and does not see the plan listed; staff see it', async () => {
       const created = await request(t.app).post('/api/plans').set('Authorization', auth(customer)).send({ name: 'Private plan', input: threePartInput() });

@@ -72,6 +72,8 @@ export const bookingRequestSchema = periodInputSchema.safeExtend({
   testPlan: testPlanSchema.default({ speeds: [], yawRange: null, configurations: [] }),
   articles: z.array(bookingArticleSchema).min(1, { message: 'Name at least one article' }).max(20),
   note: text(4000).default(''),
+  /** A saved test plan of the customer's organisation to attach; the plan then names this booking. */
+  planId: z.uuid({ message: 'Choose one of your saved plans' }).optional(),
 });
 export type BookingRequest = z.infer<typeof bookingRequestSchema>;
 

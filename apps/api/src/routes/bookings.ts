@@ -15,7 +15,7 @@ import {
   type BookingSettings,
   type QuoteLineInput,
 } from '@tunnelwright/contracts';
-import { Booking, expireLapsedHolds, isStaff, Organisation, Quote, recordAudit, scopeToCaller, Service, TestRecord, Tunnel, User } from '@tunnelwright/db';
+import { Booking, expireLapsedHolds, isStaff, Organisation, Plan, Quote, recordAudit, scopeToCaller, Service, TestRecord, Tunnel, User } from '@tunnelwright/db';
 import type { Knex } from 'knex';
 import { bookingGraph, liveQuote, loadBooking, toBooking } from '../bookings/booking-presenter';
 import { auditView, mailQuietly, transitionBooking, withClashCheck } from '../bookings/booking-transitions';
@@ -142,6 +142,10 @@ export const bookingRoutes: RouteDef[] = [
             icsSequence: 0,
           });
           await recordAudit(trx, { actorId: caller.id, action: 'booking.requested', entity: 'booking', entityId: booking.id, after: auditView(booking) });
+          if (body.planId) {
+            const attached = await Plan.query(trx).patch({ bookingId: booking.id }).where({ id: body.planId, organisationId: caller.organisationId });
+            if (attached === 0) throw HttpError.field('planId', 'Choose one of your saved plans');
+          }
           return booking.id;
         }),
       );
