@@ -6,6 +6,7 @@
 import type { Knex } from 'knex';
 import argon2 from 'argon2';
 import { createKnex, migrationConfig, Organisation, recordAudit, Service, Tunnel, User } from '@tunnelwright/db';
+import { seedBookings } from './seed/bookings';
 import { demoServices, demoTunnels } from './seed/catalogue';
 import { demoCustomers, demoLab, demoPassword, demoUsers } from './seed/demo-users';
 import { seedPlans } from './seed/plans';
@@ -58,6 +59,8 @@ async function seed(knex: Knex): Promise<string[]> {
     }
 
     await seedPlans(trx, created);
+
+    await seedBookings(trx, created);
 
     if (created.length > 0) {
       await recordAudit(trx, { actorId: null, action: 'demo.seeded', entity: 'system', entityId: null, after: { created } });
