@@ -66,43 +66,52 @@ else
   summary_tool record "$LEDGER" "prepare test database" 0
 fi
 
-# run_check NAME COMMAND...: a step that counts as one check.
+# Each step has a time limit so that a hanging test cannot hold the whole run (exit code 124 then).
+limited() {
+  local seconds="$1"; shift
+  timeout --kill-after=20 "$seconds" "$@"
+  local code=$?
+  [ "$code" -eq 124 ] && echo "[test] stopped after ${seconds} s: time limit of this step"
+  return "$code"
+}
+
+# run_check NAME SECONDS COMMAND...: a step that counts as one check.
 run_check() {
-  local name="$1"; shift
+  local name="$1" seconds="$2"; shift 2
   header "$name"
-  "$@"
+  limited "$seconds" "$@"
   summary_tool record "$LEDGER" "$name" "$?"
 }
 
-# run_vitest NAME JSON COMMAND...: a step whose tests are counted from vitest's JSON report.
+# run_vitest NAME SECONDS JSON COMMAND...: a step whose tests are counted from vitest's JSON report.
 run_vitest() {
-  local name="$1" json="$2"; shift 2
+  local name="$1" seconds="$2" json="$3"; shift 3
   header "$name"
-  "$@"
+  limited "$seconds" "$@"
   summary_tool record "$LEDGER" "$name" "$?" "$json"
 }
 
-run_check "typecheck" npm run --silent typecheck
-run_check "lint" npm run --silent lint
+run_check "typecheck" 300 npm run --silent typecheck
+run_check "lint" 300 npm run --silent lint
 
-run_vitest "unit (vitest)" "$RESULTS/unit.json" \
-  npx vitest run --project unit --passWithNoTests --reporter=default --reporter=json --outputFile.json="$RESULTS/unit.json"
+run_vitest "unit (vitest)" 600 "$RESULTS/unit.json" \
+  node_modules/.bin/vitest run --project unit --passWithNoTests --reporter=default --reporter=json --outputFile.json="$RESULTS/unit.json"
 
 if find apps/web/src -name '*.spec.ts' -print -quit 2>/dev/null | grep -q .; then
-  run_vitest "unit (Angular)" "$RESULTS/web-unit.json" \
-    npx ng test --no-watch --no-progress --reporters=json --reporters=default --output-file="$RESULTS/web-unit.json"
+  run_vitest "unit (Angular)" 600 "$RESULTS/web-unit.json" \
+    node_modules/.bin/ng test --no-watch --no-progress --reporters=json --reporters=default --output-file="$RESULTS/web-unit.json"
 else
   header "unit (Angular)"
   echo "[test] no Angular specs yet (apps/web/src/**/*.spec.ts): skipped"
 fi
 
-run_check "build client" npx ng build --configuration production --no-progress
+run_check "build client" 600 node_modules/.bin/ng build --configuration production --no-progress
 
-run_vitest "integration" "$RESULTS/integration.json" \
-  npx vitest run --project integration --passWithNoTests --reporter=default --reporter=json --outputFile.json="$RESULTS/integration.json"
+run_vitest "integration" 900 "$RESULTS/integration.json" \
+  node_modules/.bin/vitest run --project integration --passWithNoTests --reporter=default --reporter=json --outputFile.json="$RESULTS/integration.json"
 
-run_vitest "browser" "$RESULTS/browser.json" \
-  npx vitest run --project browser --passWithNoTests --reporter=default --reporter=json --outputFile.json="$RESULTS/browser.json"
+run_vitest "browser" 600 "$RESULTS/browser.json" \
+  node_modules/.bin/vitest run --project browser --passWithNoTests --reporter=default --reporter=json --outputFile.json="$RESULTS/browser.json"
 
 header "summary"
 echo "[test] took $(( $(date +%s) - started_at )) s"
