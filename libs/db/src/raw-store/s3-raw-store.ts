@@ -1,6 +1,11 @@
 import { randomUUID } from 'node:crypto';
+import { createReadStream, createWriteStream } from 'node:fs';
+import { mkdir, unlink } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { Readable } from 'node:stream';
-import { CopyObjectCommand, DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, S3Client, type S3ClientConfig } from '@aws-sdk/client-s3';
+import { pipeline } from 'node:stream/promises';
+import { GetObjectCommand, HeadObjectCommand, S3Client, type S3ClientConfig } from '@aws-sdk/client-s3';
 import { Upload } from '@aws-sdk/lib-storage';
 import { HashingStream } from './hash-stream';
 import { RawObjectMissingError } from './raw-object-missing-error';
@@ -15,6 +20,8 @@ export interface S3RawStoreOptions {
   secretAccessKey?: string;
   /** Path-style URLs (`endpoint/bucket/key`), needed by s3rver and most self-hosted stores. */
   forcePathStyle?: boolean;
+  /** Local folder where bytes wait while they are hashed (default: the OS temp folder). */
+  spoolDir?: string;
 }
 
 function isNotFound(error: unknown): boolean {
@@ -23,8 +30,9 @@ function isNotFound(error: unknown): boolean {
 }
 
 /**
- * Raw store in an S3 bucket. Bytes are uploaded (multipart) under a temporary key while hashed, then
- * copied to their content key unless that key already exists, and the temporary object is removed.
+ * Raw store in an S3 bucket. Bytes are spooled to a local temporary file while hashed (the key is their
+ * hash, so it is known only at the end), then uploaded (multipart) under their content key unless that
+ * key already exists; the spooled file is removed either way.
  */
 export class S3RawStore implements RawStore {
   readonly client: S3Client;
@@ -45,22 +53,20 @@ export class S3RawStore implements RawStore {
   }
 
   async put(input: Readable | AsyncIterable<Buffer | Uint8Array> | Iterable<Buffer | Uint8Array>): Promise<StoredObject> {
+    const spoolDir = this.options.spoolDir ?? join(tmpdir(), 'tunnelwright-s3-spool');
+    await mkdir(spoolDir, { recursive: true });
+    const spool = join(spoolDir, `${randomUUID()}.part`);
     const hashing = new HashingStream();
-    const source = input instanceof Readable ? input : Readable.from(input);
-    source.on('error', (error) => hashing.destroy(error));
-    source.pipe(hashing);
-    const temporaryKey = `tmp/${randomUUID()}`;
-    const { bucket } = this.options;
     try {
-      await new Upload({ client: this.client, params: { Bucket: bucket, Key: temporaryKey, Body: hashing } }).done();
+      await pipeline(input instanceof Readable ? input : Readable.from(input), hashing, createWriteStream(spool, { flags: 'wx' }));
       const sha256 = hashing.digest();
       const key = contentKey(sha256);
       if (!(await this.exists(key))) {
-        await this.client.send(new CopyObjectCommand({ Bucket: bucket, Key: key, CopySource: `${bucket}/${temporaryKey}` }));
+        await new Upload({ client: this.client, params: { Bucket: this.options.bucket, Key: key, Body: createReadStream(spool), ContentLength: hashing.size } }).done();
       }
       return { sha256, size: hashing.size, key };
     } finally {
-      await this.client.send(new DeleteObjectCommand({ Bucket: bucket, Key: temporaryKey })).catch(() => undefined);
+      await unlink(spool).catch(() => undefined);
     }
   }
 
