@@ -163,6 +163,18 @@ describe('/api/bookings', () => {
       expect(audit.map((a: { action: string }) => a.action)).toEqual(['booking.requested', 'booking.expired']);
     });
 
+    it('with a plan of the caller’s organisation → 201 and the plan names the booking; another organisation’s plan → 400 on planId', async () => {
+      const [own] = await t.knex('plans').insert({ organisation_id: customer.organisationId, name: `Deck plan ${fixtures.unique()}`, current_version: 1, created_by: customer.id }).returning('id');
+      const [theirs] = await t.knex('plans').insert({ organisation_id: rival.organisationId, name: `Frame plan ${fixtures.unique()}`, current_version: 1, created_by: rival.id }).returning('id');
+      const tunnelId = await fixtures.tunnelId();
+      const refused = await ask(customer, { ...requestBody(tunnelId, ahead(24), ahead(24, 2)), planId: theirs.id });
+      expect(refused.status).toBe(400);
+      expect(refused.body.errors[0].field).toBe('planId');
+      const created = await ask(customer, { ...requestBody(tunnelId, ahead(24), ahead(24, 2)), planId: own.id });
+      expect(created.status).toBe(201);
+      expect((await t.knex('plans').where({ id: own.id }).first()).bookingId).toBe(created.body.id);
+    });
+
     it('lab manager → 403 (customers request for themselves)', async () => {
       expect((await ask(manager, requestBody(await fixtures.tunnelId(), ahead(10), ahead(10, 2)))).status).toBe(403);
     });

@@ -125,6 +125,8 @@ export const bookingRoutes: RouteDef[] = [
             const service = await Service.query(trx).findById(body.serviceId);
             if (!service || service.archivedAt || (service.tunnelId && service.tunnelId !== tunnel.id)) throw HttpError.field('serviceId', 'This service is not available on this tunnel');
           }
+          const plan = body.planId ? await Plan.query(trx).findById(body.planId).forUpdate() : undefined;
+          if (body.planId && (!plan || plan.organisationId !== caller.organisationId)) throw HttpError.field('planId', 'Choose one of your organisation’s plans');
           // Lapsed holds on this tunnel must not block the new request, even between sweeps.
           await expireLapsedHolds(trx, { tunnelId: tunnel.id });
           const booking = await Booking.query(trx).insert({
