@@ -9,6 +9,7 @@ import { createKnex, migrationConfig, Organisation, recordAudit, Service, Tunnel
 import { seedBookings } from './seed/bookings';
 import { demoServices, demoTunnels } from './seed/catalogue';
 import { demoCustomers, demoLab, demoPassword, demoUsers } from './seed/demo-users';
+import { seedIngest } from './seed/ingest';
 import { seedPlans } from './seed/plans';
 
 async function ensureOrganisation(trx: Knex.Transaction, name: string, kind: 'lab' | 'customer', created: string[]): Promise<Organisation> {
@@ -74,6 +75,7 @@ const knex = createKnex(url);
 try {
   await knex.migrate.latest(migrationConfig);
   const created = await seed(knex);
+  await seedIngest(knex, created);
   console.log(created.length === 0 ? 'Demo data already present; nothing changed.' : `Created:\n  ${created.join('\n  ')}`);
   console.log(`\nDemo sign-ins (password for all: ${demoPassword}):`);
   for (const person of demoUsers) console.log(`  ${person.role.padEnd(12)} ${person.email.padEnd(34)} ${person.name} — ${person.organisation}`);
