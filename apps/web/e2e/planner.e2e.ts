@@ -81,5 +81,8 @@ describe('test planner', () => {
 
     await page.getByRole('button', { name: 'Save new version' }).click();
     await page.getByRole('status').filter({ hasText: 'as version 2.' }).waitFor();
+    // Both versions are kept and listed, newest first.
+    await page.getByRole('button', { name: 'Load version 1 into the editor' }).waitFor();
+    await page.getByRole('button', { name: 'Load version 2 into the editor' }).waitFor();
   });
 });

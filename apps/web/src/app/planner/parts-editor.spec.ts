@@ -75,7 +75,7 @@ class Host {
   readonly shapes = signal(shapes);
 }
 
-describe('PartsEditor', () => {
+describe('PartsEditor', { timeout: 20_000 }, () => {
   let loader: HarnessLoader;
   let host: Host;
   let element: HTMLElement;

@@ -55,7 +55,7 @@ const evaluation: PlanEvaluation = {
   measured: null,
 };
 
-describe('PlannerPage', () => {
+describe('PlannerPage', { timeout: 20_000 }, () => {
   let fixture: ComponentFixture<PlannerPage>;
   let loader: HarnessLoader;
   let backend: HttpTestingController;
@@ -139,9 +139,15 @@ describe('PlannerPage', () => {
     fixture.detectChanges();
     // Saving reloads the list so the new plan appears in it.
     backend.expectOne('/api/plans').flush({ items: [], caution });
+    backend.expectOne('/api/plans/7c1d2e3f-4a5b-4c6d-8e7f-9a0b1c2d3e4f/versions').flush({
+      items: [{ id: '8d2e3f40-5b6c-4d7e-9f80-a1b2c3d4e5f6', version: 1, input: {}, note: 'First try', createdBy: 'x', createdAt: '2026-11-30T10:00:00.000Z' }],
+      caution,
+    });
     await settle();
     backend.match('/api/plans/evaluate').forEach((request) => request.flush(evaluation));
     await fixture.whenStable();
     expect(text()).toContain('Saved “Garden globe” as version 1.');
+    expect(text()).toContain('First try');
+    expect(await loader.getHarness(MatButtonHarness.with({ selector: '[aria-label="Load version 1 into the editor"]' }))).toBeTruthy();
   });
 });

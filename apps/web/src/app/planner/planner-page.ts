@@ -10,7 +10,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatListModule } from '@angular/material/list';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
-import type { FieldError, Organisation, PlanDetail, PlanEvaluation, PlanInputDraft } from '@tunnelwright/contracts';
+import type { FieldError, Organisation, PlanDetail, PlanEvaluation, PlanInputDraft, PlanVersion } from '@tunnelwright/contracts';
 import { Subject, catchError, debounceTime, distinctUntilChanged, map, merge, of, startWith, switchMap } from 'rxjs';
 import { AuthService } from '../core/auth-service';
 import { CatalogueApi } from '../core/catalogue-api';
@@ -82,6 +82,18 @@ export class PlannerPage {
   protected readonly organisationId = signal('');
 
   protected readonly selected = signal<PlanDetail | null>(null);
+  /** Every saved version of the open plan, newest first; reloaded after each save. */
+  protected readonly versions = rxResource({
+    params: () => {
+      const plan = this.selected();
+      return plan ? { id: plan.id, version: plan.currentVersion } : undefined;
+    },
+    stream: ({ params }) => this.api.versions(params.id),
+  });
+  protected readonly versionsError = computed(() => {
+    const error = this.versions.error();
+    return error ? problemMessage(error.cause ?? error, 'The versions could not be loaded.') : null;
+  });
   protected readonly opening = signal(false);
   protected readonly saving = signal(false);
   protected readonly saveError = signal<string | null>(null);
@@ -166,6 +178,14 @@ export class PlannerPage {
           this.openError.set(problemMessage(error, 'The plan could not be opened.'));
         },
       });
+  }
+
+  /** Puts an older version into the editor; saving it then adds it again as the newest version. */
+  protected loadVersion(version: PlanVersion): void {
+    const plan = this.selected();
+    if (!plan) return;
+    fillPlanForm(this.form, plan.name, version.input, this.shapeItems());
+    this.savedMessage.set(`Version ${version.version} is in the editor; save to make it the newest version.`);
   }
 
   protected readonly canSave = computed(() => !(this.isAnalyst() && this.selected() === null));
