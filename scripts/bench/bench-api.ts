@@ -11,7 +11,9 @@
  * Goal on 2 cores: at least 500 requests/s with p95 at most 50 ms.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import { createServer } from 'node:net';
+import { availableParallelism, loadavg } from 'node:os';
 import { resolve } from 'node:path';
 import autocannon, { type AutocannonResult } from 'autocannon';
 import { demoPassword, demoUsers } from '../seed/demo-users';
@@ -40,6 +42,16 @@ function percentile(sorted: number[], fraction: number): number {
   if (sorted.length === 0) return Number.NaN;
   const rank = Math.ceil(fraction * sorted.length);
   return sorted[Math.min(sorted.length, Math.max(1, rank)) - 1];
+}
+
+/**
+ * CPU time used so far by a process, in milliseconds (user + system, from /proc): with the load average
+ * it tells a slow API from a busy machine.
+ */
+function cpuMilliseconds(pid: number): number {
+  const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
+  // Fields 14 and 15 of /proc/<pid>/stat (utime, stime), in clock ticks of 10 ms on Linux.
+  return (Number(fields[11]) + Number(fields[12])) * 10;
 }
 
 async function waitForHealth(baseUrl: string, api: ChildProcess, log: string[]): Promise<void> {
@@ -116,7 +128,9 @@ try {
   // A short warm-up so the first figures do not include module compilation and cold caches.
   await runLoad(`${baseUrl}${route}`, token, 2, []);
   const latencies: number[] = [];
+  const cpuBefore = api.pid ? cpuMilliseconds(api.pid) : Number.NaN;
   const result = await runLoad(`${baseUrl}${route}`, token, durationSeconds, latencies);
+  const cpuUsed = api.pid ? cpuMilliseconds(api.pid) - cpuBefore : Number.NaN;
   latencies.sort((a, b) => a - b);
 
   const requestsPerSecond = latencies.length / result.duration;
@@ -129,6 +143,9 @@ try {
   console.log(`latency p50         ${p50.toFixed(2)} ms`);
   console.log(`latency p95         ${p95.toFixed(2)} ms   (goal ≤ ${goal.p95Ms} ms)`);
   console.log(`latency p99         ${p99.toFixed(2)} ms`);
+  const cpuPerRequest = cpuUsed / latencies.length;
+  console.log(`API CPU / request   ${cpuPerRequest.toFixed(2)} ms   (one core could serve about ${(1000 / cpuPerRequest).toFixed(0)} requests/s)`);
+  console.log(`load average        ${loadavg().map((value) => value.toFixed(2)).join(' ')} (1, 5, 15 min) on ${availableParallelism()} cores`);
   const met = requestsPerSecond >= goal.requestsPerSecond && p95 <= goal.p95Ms && result.non2xx === 0 && result.errors === 0;
   console.log(`goal                ${met ? 'met' : 'NOT met'}`);
 } finally {
