@@ -1,4 +1,5 @@
 import { Routes } from '@angular/router';
+import { bookingRoutes } from './booking/booking.routes';
 import { roleGuard } from './core/role-guard';
 import { signedInGuard, signedOutGuard } from './core/signed-in-guard';
 
@@ -42,6 +43,11 @@ export const routes: Routes = [
         title: 'Test planner · Tunnelwright',
         canActivate: [roleGuard(['customer', 'analyst', 'lab_manager'])],
         loadComponent: () => import('./planner/planner-page').then((m) => m.PlannerPage),
+      },
+      ...bookingRoutes,
+      {
+        path: '',
+        loadChildren: () => import('./testing-runs/testing-runs.routes').then((m) => m.testingRunsRoutes),
       },
       {
         path: 'profile',

@@ -75,8 +75,10 @@ export class LabBookingsPage {
 
   /** Currency and hourly rate to start a quote with: the service's, when it is priced by the hour. */
   protected pricing(booking: Booking): { currency: string; hourlyRateMinor: number } {
-    const service = (this.services.hasValue() ? this.services.value() : []).find((s) => s.id === booking.serviceId);
-    return { currency: service?.currency ?? 'EUR', hourlyRateMinor: service?.unit === 'hour' ? service.rate : 0 };
+    const services = this.services.hasValue() ? this.services.value() : [];
+    const service = services.find((s) => s.id === booking.serviceId);
+    // Without a service, the catalogue's currency is the lab's best guess.
+    return { currency: service?.currency ?? services[0]?.currency ?? 'EUR', hourlyRateMinor: service?.unit === 'hour' ? service.rate : 0 };
   }
 
   protected sendQuote(booking: Booking, quote: QuoteInput): void {

@@ -7,16 +7,20 @@ describe('navItemsFor', () => {
     expect(navItemsFor(null, true)).toEqual([]);
   });
 
-  it('shows a technician only the catalogue', () => {
-    expect(labels('technician', true)).toEqual(['Catalogue']);
+  it('shows a technician the catalogue, their tunnel time and the tests', () => {
+    expect(labels('technician', true)).toEqual(['Catalogue', 'My tunnel time', 'Tests']);
   });
 
-  it.each(['customer', 'analyst'] as const)('shows a %s the catalogue and the test planner', (role) => {
-    expect(labels(role, true)).toEqual(['Catalogue', 'Test planner']);
+  it('shows a customer the catalogue, the test planner, their bookings and their tests', () => {
+    expect(labels('customer', true)).toEqual(['Catalogue', 'Test planner', 'My bookings', 'Tests']);
+  });
+
+  it('shows an analyst the catalogue, the test planner and the tests', () => {
+    expect(labels('analyst', true)).toEqual(['Catalogue', 'Test planner', 'Tests']);
   });
 
   it('shows a lab manager the administration sections and, in demo mode, the dev mailbox', () => {
-    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Users', 'Tunnels', 'Services', 'Audit log', 'Dev mailbox']);
+    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Users', 'Tunnels', 'Services', 'Audit log', 'Dev mailbox']);
   });
 
   it('hides the dev mailbox when demo mode is off', () => {
