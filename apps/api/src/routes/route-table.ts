@@ -1,6 +1,7 @@
 import { articleRoutes } from './articles';
 import { auditRoutes } from './audit';
 import { balanceRoutes } from './balances';
+import { bookingAttachmentRoutes } from './booking-attachments';
 import { bookingRoutes } from './bookings';
 import { authRoutes } from './auth';
 import { devMailboxRoutes } from './dev-mailbox';
@@ -44,6 +45,7 @@ export const resources: Resource[] = [
   { mount: '/api/shapes', routes: shapeRoutes },
   { mount: '/api/plans', routes: planRoutes },
   { mount: '/api/bookings', routes: bookingRoutes },
+  { mount: '/api/bookings', routes: bookingAttachmentRoutes },
   { mount: '/api/maintenance-blocks', routes: maintenanceBlockRoutes },
 ];
 
