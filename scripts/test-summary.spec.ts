@@ -6,7 +6,6 @@ function vitestReport(overrides: Partial<VitestJsonReport>): VitestJsonReport {
     numPassedTests: 0,
     numFailedTests: 0,
     numPendingTests: 0,
-    numTodoTests: 0,
     numTotalTests: 0,
     testResults: [],
     ...overrides,

@@ -18,7 +18,6 @@ export interface VitestJsonReport {
   numPassedTests: number;
   numFailedTests: number;
   numPendingTests: number;
-  numTodoTests: number;
   numTotalTests: number;
   testResults: { name: string; status: string; message?: string; assertionResults: { status: string }[] }[];
 }
@@ -53,7 +52,7 @@ export function countStep(step: string, exitCode: number, report: VitestJsonRepo
     return { step, passed: 0, failed: 1, skipped: 0, note: `no test report (runner exited ${exitCode})` };
   }
   const files = report.testResults.length;
-  const skipped = report.numPendingTests + report.numTodoTests;
+  const skipped = report.numPendingTests;
   let failed = report.numFailedTests;
   const notes: string[] = [];
   // A file that throws while loading, or whose beforeAll throws, fails with no failed test of its own.
