@@ -29,8 +29,9 @@ function ensureSpace(doc: PDFKit.PDFDocument, height: number): void {
   if (doc.y + height > BOTTOM_LIMIT) doc.addPage();
 }
 
-function section(doc: PDFKit.PDFDocument, number: number, title: string): void {
-  ensureSpace(doc, 60);
+/** A numbered section heading, kept on one page with at least `keepWith` pt of what follows it. */
+function section(doc: PDFKit.PDFDocument, number: number, title: string, keepWith = 60): void {
+  ensureSpace(doc, 24 + keepWith);
   doc.moveDown(0.6);
   const y = doc.y;
   doc.font(fonts.bold).fontSize(sizes.section).fillColor(colours.accent).text(`${number}  ${title}`, page.marginLeft, y);
@@ -369,11 +370,10 @@ export async function renderResultSheet(data: ResultSheetData): Promise<Buffer> 
   field(doc, 'Data reduction', data.method.engineVersion);
   field(doc, 'Uncertainty', data.method.uncertaintyMethod);
 
-  section(doc, 5, 'Test conditions');
+  section(doc, 5, 'Test conditions', 70 + 16 * data.configurations.length);
   testConditions(doc, data);
 
-  doc.addPage();
-  section(doc, 6, 'Results');
+  section(doc, 6, 'Results', 200);
   paragraph(
     doc,
     `Corrected coefficients on the reference area S = ${formatNumber(data.article.referenceArea, 4)} m² (${AREA_KIND[data.article.referenceAreaKind]}) and, for moments, ` +

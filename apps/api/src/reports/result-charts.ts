@@ -85,6 +85,13 @@ const white: Plugin<'scatter'> = {
   },
 };
 
+/** Tick label with a true minus sign, as in the tables. */
+function tickLabel(value: string | number): string {
+  return Number(value)
+    .toLocaleString('en-GB', { maximumFractionDigits: 4, useGrouping: false })
+    .replace('-', '−');
+}
+
 /** A y range that holds every error bar, with a margin. */
 function valueRange(series: Series[]): { suggestedMin: number; suggestedMax: number } {
   const ends = series.flatMap((s) => s.points.flatMap((p) => [p.y.value - p.y.expandedUncertainty, p.y.value + p.y.expandedUncertainty]));
@@ -101,7 +108,7 @@ function yawAxis(series: Series[]): { min: number; max: number; ticks: { stepSiz
 }
 
 function drawChart(title: string, xTitle: string, yTitle: string, series: Series[], xTick?: (v: number) => string): Buffer {
-  const xAxis = xTick ? { ticks: { callback: (v: string | number) => xTick(Number(v)) } } : yawAxis(series);
+  const xAxis = xTick ? { ticks: { callback: (v: string | number) => xTick(Number(v)) } } : { ...yawAxis(series), ticks: { stepSize: 2, callback: tickLabel } };
   registerChartFont();
   Chart.defaults.font.family = CHART_FONT_FAMILY;
   Chart.defaults.font.size = 8;
@@ -128,7 +135,7 @@ function drawChart(title: string, xTitle: string, yTitle: string, series: Series
       layout: { padding: 4 },
       scales: {
         x: { type: 'linear', title: { display: true, text: xTitle }, grid: { color: '#e3e3e3' }, ...xAxis },
-        y: { type: 'linear', title: { display: true, text: yTitle }, grid: { color: '#e3e3e3' }, ...valueRange(series) },
+        y: { type: 'linear', title: { display: true, text: yTitle }, grid: { color: '#e3e3e3' }, ...valueRange(series), ticks: { callback: tickLabel } },
       },
       plugins: {
         title: { display: true, text: title, font: { size: 9, weight: 'bold' }, align: 'start' },
