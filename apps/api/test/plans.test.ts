@@ -250,7 +250,7 @@ describe('/api/plans', () => {
 
       const foreign = await request(t.app).post('/api/bookings').set('Authorization', auth(otherCustomer)).send(await bookingBody(created.body.id));
       expect(foreign.status).toBe(400);
-      expect(foreign.body.errors).toEqual([{ field: 'planId', message: 'Choose one of your saved plans' }]);
+      expect(foreign.body.errors).toEqual([expect.objectContaining({ field: 'planId' })]);
     });
   });
 
