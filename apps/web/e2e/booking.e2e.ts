@@ -1,0 +1,119 @@
+import { mkdirSync } from 'node:fs';
+import { DateTime } from 'luxon';
+import type { Page } from 'playwright-core';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { demoUsers } from '../../../scripts/seed/demo-users';
+import { startApiServer, type ApiServer } from './support/api-server';
+import { launchBrowser, type TestBrowser } from './support/browser';
+import { signIn } from './support/sign-in';
+
+const shots = '/tmp/tw-shots';
+
+function userOf(role: 'lab_manager' | 'customer') {
+  const user = demoUsers.find((candidate) => candidate.role === role);
+  if (!user) {
+    throw new Error(`The demo seed has no ${role}`);
+  }
+  return user;
+}
+
+async function openSection(page: Page, label: string, heading: string): Promise<void> {
+  await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: label, exact: true }).click();
+  await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
+}
+
+describe('booking tunnel time', () => {
+  let api: ApiServer;
+  let browser: TestBrowser;
+
+  beforeAll(async () => {
+    mkdirSync(shots, { recursive: true });
+    api = await startApiServer();
+    browser = await launchBrowser();
+  });
+
+  afterEach(() => {
+    expect(browser.problems).toEqual([]);
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    await api?.stop();
+  });
+
+  it('a customer requests time, the lab manager quotes it, the customer accepts, both see it confirmed and the invitation is mailed', async () => {
+    const customer = userOf('customer');
+    const manager = userOf('lab_manager');
+    const article = `Roof-box model ${Date.now().toString(36)}`;
+    // Far beyond the seeded demo bookings, so the slot is free.
+    const day = DateTime.now().plus({ days: 90 }).toFormat('yyyy-LL-dd');
+
+    const customerPage = await browser.freshPage();
+    await signIn(customerPage, api.baseUrl, customer.email);
+    await openSection(customerPage, 'My bookings', 'My bookings');
+    await customerPage.getByRole('link', { name: 'Request tunnel time' }).first().click();
+    await customerPage.getByRole('heading', { name: 'Request tunnel time' }).waitFor();
+    await customerPage.getByRole('button', { name: 'Send request' }).click();
+    await customerPage.getByText('Choose a tunnel').waitFor();
+    await customerPage.getByText('Name the article').waitFor();
+
+    await customerPage.getByRole('combobox', { name: 'Tunnel' }).click();
+    await customerPage.getByRole('option', { name: 'Tunnel 1 — closed section' }).click();
+    await customerPage.getByRole('combobox', { name: 'Service' }).click();
+    await customerPage.getByRole('option', { name: 'Full-day tunnel block' }).click();
+    await customerPage.getByLabel('Start').fill(`${day}T09:00`);
+    await customerPage.getByLabel('End').fill(`${day}T17:00`);
+    await customerPage.getByLabel('Article name').fill(article);
+    // The keyboard, as a user tabbing through the article row would.
+    await customerPage.getByRole('combobox', { name: 'Coefficients based on' }).focus();
+    await customerPage.keyboard.press('Enter');
+    await customerPage.getByRole('option', { name: 'Frontal area' }).click();
+    await customerPage.getByLabel('Speeds (m/s)').fill('20, 30, 40');
+    await customerPage.getByLabel('Yaw from (°)').fill('-10');
+    await customerPage.getByLabel('Yaw to (°)').fill('10');
+    await customerPage.screenshot({ path: `${shots}/booking-request.png` });
+    await customerPage.getByRole('button', { name: 'Send request' }).click();
+    await customerPage.getByRole('heading', { name: 'My bookings', level: 1 }).waitFor();
+    const customerCard = customerPage.locator('tw-booking-summary').filter({ hasText: article });
+    await customerCard.getByText('Requested', { exact: true }).waitFor();
+
+    const managerPage = await browser.freshPage();
+    await signIn(managerPage, api.baseUrl, manager.email);
+    await openSection(managerPage, 'Bookings', 'Bookings');
+    const managerCard = managerPage.locator('tw-booking-summary').filter({ hasText: article });
+    await managerCard.getByRole('button', { name: 'Write quote' }).click();
+    await managerCard.getByLabel(/^Unit price/).fill('150');
+    await managerCard.getByText('Total £1,200.00').waitFor();
+    await managerCard.getByRole('button', { name: 'Add line' }).click();
+    await managerCard.getByLabel(/^Unit price/).nth(1).fill('600');
+    await managerCard.getByText('Total £1,800.00').waitFor();
+    await managerPage.screenshot({ path: `${shots}/booking-quote.png` });
+    await managerCard.getByRole('button', { name: 'Send quote' }).click();
+    await managerPage.getByText('Quote sent to the customer.').waitFor();
+    await managerCard.getByText('Quote to answer', { exact: true }).waitFor();
+
+    // One tab at a time: each sign-in starts from a fresh page.
+    const answerPage = await browser.freshPage();
+    await signIn(answerPage, api.baseUrl, customer.email);
+    await openSection(answerPage, 'My bookings', 'My bookings');
+    const answerCard = answerPage.locator('tw-booking-summary').filter({ hasText: article });
+    await answerCard.getByText('Quote to answer', { exact: true }).waitFor();
+    expect(await answerCard.getByTestId('quote-total').innerText()).toBe('£1,800.00');
+    await answerCard.getByRole('button', { name: 'Accept quote' }).click();
+    await answerPage.getByRole('dialog').getByText('£1,800.00').waitFor();
+    await answerPage.getByRole('dialog').getByRole('button', { name: 'Accept quote' }).click();
+    await answerCard.getByText('Confirmed', { exact: true }).waitFor();
+    await answerPage.screenshot({ path: `${shots}/booking-confirmed.png` });
+
+    const checkPage = await browser.freshPage();
+    await signIn(checkPage, api.baseUrl, manager.email);
+    await openSection(checkPage, 'Bookings', 'Bookings');
+    await checkPage.locator('tw-booking-summary').filter({ hasText: article }).getByText('Confirmed', { exact: true }).waitFor();
+
+    await checkPage.goto(`${api.baseUrl}/dev-mailbox`);
+    const mail = checkPage.locator('mat-expansion-panel').filter({ hasText: 'Booking confirmed: Tunnel 1' }).filter({ hasText: customer.email }).first();
+    await mail.waitFor();
+    await mail.click();
+    await mail.getByText(/booking\.ics \(text\/calendar/).waitFor();
+  });
+});
