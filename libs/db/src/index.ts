@@ -22,7 +22,7 @@ export { ReductionPoint } from './models/reduction-point';
 export { OutboxMessage } from './models/outbox-message';
 export { dispatchOutbox, type OutboxSender } from './outbox';
 export * from './raw-store';
-export { reductionQueue, queuePrefix } from './reduction-jobs';
+export { reductionQueue, queuePrefix, reductionOutboxQueue } from './reduction-jobs';
 export { Plan } from './models/plan';
 export { PlanVersion } from './models/plan-version';
 export { Booking } from './models/booking';

@@ -13,3 +13,11 @@ export const reductionQueue = {
 export function queuePrefix(env: NodeJS.ProcessEnv = process.env): string {
   return env.QUEUE_PREFIX ?? 'bull';
 }
+
+/**
+ * The outbox `queue` value of reduction jobs under a BullMQ prefix. Dispatchers only send the messages of
+ * their own prefix, so separate deployments (or test runs) sharing a database never take each other's jobs.
+ */
+export function reductionOutboxQueue(prefix: string = queuePrefix()): string {
+  return `${prefix}:${reductionQueue.name}`;
+}

@@ -1,6 +1,6 @@
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { createRawStore, dispatchOutbox, queuePrefix, reductionQueue, type RawStore } from '@tunnelwright/db';
+import { createRawStore, dispatchOutbox, queuePrefix, reductionOutboxQueue, reductionQueue, type RawStore } from '@tunnelwright/db';
 import { Queue } from 'bullmq';
 import type { AppDeps } from '../deps';
 
@@ -41,6 +41,7 @@ export function ingestServices(deps: AppDeps, env: NodeJS.ProcessEnv = process.e
     dispatch: (ids) =>
       dispatchOutbox(
         deps.knex,
+        reductionOutboxQueue(queuePrefix(env)),
         async (message) => {
           await queue.add(message.jobName, message.payload, { ...reductionQueue.jobOptions, jobId: message.jobId });
         },

@@ -1,5 +1,5 @@
 import { ENGINE_VERSION, type ReductionConfig } from '@tunnelwright/aero';
-import { OutboxMessage, Reduction, reductionQueue, Run } from '@tunnelwright/db';
+import { OutboxMessage, Reduction, reductionOutboxQueue, reductionQueue, Run } from '@tunnelwright/db';
 import type { Knex } from 'knex';
 import type { CalibrationUse } from './calibration-check';
 
@@ -39,7 +39,7 @@ export async function queueReduction(trx: Knex.Transaction, input: NewReduction)
     })
     .returning('*');
   const message = await OutboxMessage.query(trx)
-    .insert({ queue: reductionQueue.name, jobName: reductionQueue.jobName, jobId: reduction.id, payload: { reductionId: reduction.id } })
+    .insert({ queue: reductionOutboxQueue(), jobName: reductionQueue.jobName, jobId: reduction.id, payload: { reductionId: reduction.id } })
     .returning('*');
   return { reduction, outboxId: message.id };
 }

@@ -1,5 +1,5 @@
 import { fileURLToPath } from 'node:url';
-import { createKnex, dispatchOutbox, queuePrefix, reductionQueue } from '@tunnelwright/db';
+import { createKnex, dispatchOutbox, queuePrefix, reductionOutboxQueue, reductionQueue } from '@tunnelwright/db';
 import { Queue, Worker } from 'bullmq';
 import { Redis } from 'ioredis';
 import type { Logger } from 'pino';
@@ -42,7 +42,7 @@ export async function startReductionWorker(options: ReductionWorkerOptions): Pro
   const lockDuration = options.lockDurationMs ?? Number(process.env.REDUCTION_LOCK_MS ?? 30_000);
 
   const dispatch = async () => {
-    const sent = await dispatchOutbox(knex, async (message) => {
+    const sent = await dispatchOutbox(knex, reductionOutboxQueue(prefix), async (message) => {
       await queue.add(message.jobName, message.payload, { ...reductionQueue.jobOptions, jobId: message.jobId });
     });
     if (sent > 0) logger.info({ sent }, 'outbox messages dispatched');
