@@ -126,7 +126,7 @@ export const bookingRoutes: RouteDef[] = [
             if (!service || service.archivedAt || (service.tunnelId && service.tunnelId !== tunnel.id)) throw HttpError.field('serviceId', 'This service is not available on this tunnel');
           }
           const plan = body.planId ? await Plan.query(trx).findById(body.planId).forUpdate() : undefined;
-          if (body.planId && (!plan || plan.organisationId !== caller.organisationId)) throw HttpError.field('planId', 'Choose one of your organisation’s plans');
+          if (body.planId && (!plan || plan.organisationId !== caller.organisationId)) throw HttpError.field('planId', 'Choose one of your saved plans');
           // Lapsed holds on this tunnel must not block the new request, even between sweeps.
           await expireLapsedHolds(trx, { tunnelId: tunnel.id });
           const booking = await Booking.query(trx).insert({
@@ -143,11 +143,9 @@ export const bookingRoutes: RouteDef[] = [
             icsUid: `${randomUUID()}@tunnelwright.invalid`,
             icsSequence: 0,
           });
-          await recordAudit(trx, { actorId: caller.id, action: 'booking.requested', entity: 'booking', entityId: booking.id, after: auditView(booking) });
-          if (body.planId) {
-            const attached = await Plan.query(trx).patch({ bookingId: booking.id }).where({ id: body.planId, organisationId: caller.organisationId });
-            if (attached === 0) throw HttpError.field('planId', 'Choose one of your saved plans');
-          }
+          // The plan row is locked above, so it is still the caller's when it is linked.
+          if (plan) await Plan.query(trx).patch({ bookingId: booking.id }).where('id', plan.id);
+          await recordAudit(trx, { actorId: caller.id, action: 'booking.requested', entity: 'booking', entityId: booking.id, after: { ...auditView(booking), planId: plan?.id ?? null } });
           return booking.id;
         }),
       );
