@@ -1,6 +1,6 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
-import type { Booking, BookingRequest, BookingSettings, CancellationPreview, PeriodInput, QuoteInput } from '@tunnelwright/contracts';
+import type { Booking, BookingRequest, BookingSettings, CancellationPreview, MaintenanceBlock, Occupancy, PeriodInput, QuoteInput } from '@tunnelwright/contracts';
 import { Observable } from 'rxjs';
 
 /** The lab's booking rules together with its IANA zone. */
@@ -66,5 +66,22 @@ export class BookingApi {
 
   cancel(id: string, reason: string, expectedFeeMinor: number): Observable<Booking> {
     return this.http.post<Booking>(`/api/bookings/${id}/cancel`, { reason, expectedFeeMinor });
+  }
+
+  /** Free and busy stretches of one tunnel; other customers' bookings carry no names. */
+  occupancy(tunnelId: string, from: string, to: string): Observable<Occupancy> {
+    return this.http.get<Occupancy>(`/api/tunnels/${tunnelId}/occupancy`, { params: { from, to } });
+  }
+
+  maintenanceBlocks(): Observable<MaintenanceBlock[]> {
+    return this.http.get<MaintenanceBlock[]>('/api/maintenance-blocks');
+  }
+
+  createMaintenanceBlock(input: PeriodInput & { tunnelId: string; reason: string }): Observable<MaintenanceBlock> {
+    return this.http.post<MaintenanceBlock>('/api/maintenance-blocks', input);
+  }
+
+  deleteMaintenanceBlock(id: string): Observable<void> {
+    return this.http.delete<void>(`/api/maintenance-blocks/${id}`);
   }
 }

@@ -54,11 +54,24 @@ describe('BookingRequestPage', () => {
     backend.expectNone('/api/bookings');
   });
 
-  it('sends the period as lab wall time with its offset, and the test plan', async () => {
-    const { loader, backend } = await open();
+  it('shows the chosen tunnel’s busy times, then sends the period as lab wall time with its offset, and the test plan', async () => {
+    const { fixture, loader, backend } = await open();
     const tunnel = await (await field(loader, /^Tunnel/)).getControl(MatSelectHarness);
     await tunnel?.open();
-    await tunnel?.clickOptions({ text: 'Low-speed circuit' });
+    // The harness waits for the page to settle, which includes the week's pending occupancy request.
+    const choosing = tunnel?.clickOptions({ text: 'Low-speed circuit' });
+    let pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
+    while (pending.length === 0) {
+      await new Promise((done) => setTimeout(done, 20));
+      pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
+    }
+    const week = pending[0]!;
+    const monday = new Date(Date.parse(week.request.params.get('from') ?? '') + 10 * 3_600_000).toISOString();
+    const mondayEnd = new Date(Date.parse(monday) + 2 * 3_600_000).toISOString();
+    week.flush({ tunnelId, timeZone: 'Europe/London', from: monday, to: mondayEnd, slots: [{ status: 'busy', period: { start: monday, end: mondayEnd, hours: 2 } }] });
+    await choosing;
+    await fixture.whenStable();
+    expect((fixture.nativeElement as HTMLElement).querySelector('tw-calendar-grid')?.textContent).toContain('Busy');
     await (await input(loader, /^Start/)).setValue('2030-10-07T09:00');
     await (await input(loader, /^End/)).setValue('2030-10-07T17:00');
     await (await input(loader, /^Article name/)).setValue('Hatchback model, 1:4');
@@ -79,5 +92,5 @@ describe('BookingRequestPage', () => {
       articles: [{ name: 'Hatchback model, 1:4', referenceAreaKind: 'frontal' }],
       testPlan: { speeds: [20, 30, 40], yawRange: { from: -10, to: 10 }, configurations: [{ label: 'Baseline' }, { label: 'Spoiler fitted' }] },
     });
-  });
+  }, 20_000);
 });

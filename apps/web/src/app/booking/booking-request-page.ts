@@ -18,12 +18,13 @@ import { BookingApi } from './booking-api';
 import { articleForm, bookingRequestForm, bookingRequestOf } from './booking-request-form';
 import { userTimeZone } from './lab-time';
 import { referenceAreaKindLabels } from './reference-area-kind-labels';
+import { TunnelOccupancyWeek } from './tunnel-occupancy-week';
 
 /** A customer asks for tunnel time: tunnel, service, period, articles and test plan. */
 @Component({
   selector: 'tw-booking-request-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, RouterLink, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule, MatIconModule, MatProgressBarModule, ErrorBanner],
+  imports: [ReactiveFormsModule, RouterLink, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule, MatIconModule, MatProgressBarModule, ErrorBanner, TunnelOccupancyWeek],
   templateUrl: './booking-request-page.html',
   styles: `
     form {
@@ -73,6 +74,7 @@ export class BookingRequestPage {
     const tunnelId = this.tunnelId();
     return (this.services.hasValue() ? this.services.value() : []).filter((service) => !service.tunnelId || service.tunnelId === tunnelId);
   });
+  protected readonly chosenTunnel = computed(() => (this.tunnels.hasValue() ? this.tunnels.value() : []).find((tunnel) => tunnel.id === this.tunnelId()) ?? null);
   protected readonly labZone = computed(() => (this.settings.hasValue() ? this.settings.value().timeZone : null));
   protected readonly viewerZone = userTimeZone();
   protected readonly loadError = computed(() => {
