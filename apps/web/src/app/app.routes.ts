@@ -46,6 +46,10 @@ export const routes: Routes = [
       },
       ...bookingRoutes,
       {
+        path: '',
+        loadChildren: () => import('./testing-runs/testing-runs.routes').then((m) => m.testingRunsRoutes),
+      },
+      {
         path: 'profile',
         title: 'Your profile · Tunnelwright',
         loadComponent: () => import('./profile/profile-page').then((m) => m.ProfilePage),

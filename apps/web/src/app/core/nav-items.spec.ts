@@ -8,19 +8,19 @@ describe('navItemsFor', () => {
   });
 
   it('shows a technician the catalogue, their tunnel time and the tests', () => {
-    expect(labels('technician', true)).toEqual(['Catalogue', 'My tunnel time']);
+    expect(labels('technician', true)).toEqual(['Catalogue', 'My tunnel time', 'Tests']);
   });
 
   it('shows a customer the catalogue, the test planner, their bookings and their tests', () => {
-    expect(labels('customer', true)).toEqual(['Catalogue', 'Test planner', 'My bookings']);
+    expect(labels('customer', true)).toEqual(['Catalogue', 'Test planner', 'My bookings', 'Tests']);
   });
 
   it('shows an analyst the catalogue, the test planner and the tests', () => {
-    expect(labels('analyst', true)).toEqual(['Catalogue', 'Test planner']);
+    expect(labels('analyst', true)).toEqual(['Catalogue', 'Test planner', 'Tests']);
   });
 
   it('shows a lab manager the administration sections and, in demo mode, the dev mailbox', () => {
-    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Users', 'Tunnels', 'Services', 'Audit log', 'Dev mailbox']);
+    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Users', 'Tunnels', 'Services', 'Audit log', 'Dev mailbox']);
   });
 
   it('hides the dev mailbox when demo mode is off', () => {

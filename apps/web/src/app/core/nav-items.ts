@@ -12,19 +12,21 @@ export interface NavItem {
 
 const catalogue: NavItem = { label: 'Catalogue', path: '/catalogue', icon: 'view_list' };
 const planner: NavItem = { label: 'Test planner', path: '/planner', icon: 'architecture' };
+const tests: NavItem = { label: 'Tests', path: '/tests', icon: 'science' };
 const myBookings: NavItem = { label: 'My bookings', path: '/bookings', icon: 'event_available' };
 const myWeek: NavItem = { label: 'My tunnel time', path: '/my-week', icon: 'today' };
 
 /** Which sections each role may open, in the order they are listed. */
 export const navItemsByRole: Readonly<Record<Role, readonly NavItem[]>> = {
-  customer: [catalogue, planner, myBookings],
-  technician: [catalogue, myWeek],
-  analyst: [catalogue, planner],
+  customer: [catalogue, planner, myBookings, tests],
+  technician: [catalogue, myWeek, tests],
+  analyst: [catalogue, planner, tests],
   lab_manager: [
     catalogue,
     planner,
     { label: 'Bookings', path: '/lab-bookings', icon: 'event_note' },
     { label: 'Calendar', path: '/lab-calendar', icon: 'calendar_view_week' },
+    tests,
     { label: 'Users', path: '/admin/users', icon: 'group' },
     { label: 'Tunnels', path: '/admin/tunnels', icon: 'air' },
     { label: 'Services', path: '/admin/services', icon: 'sell' },

@@ -1,0 +1,73 @@
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatChipsModule } from '@angular/material/chips';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatTableModule } from '@angular/material/table';
+import { RouterLink } from '@angular/router';
+import type { ReductionState, RunKind } from '@tunnelwright/contracts';
+import { AuthService } from '../core/auth-service';
+import { problemMessage } from '../core/problem-message';
+import { SafetyNotice } from '../core/safety-notice';
+import { EmptyState } from '../shared/empty-state';
+import { ErrorBanner } from '../shared/error-banner';
+import { CdYawChart } from './cd-yaw-chart';
+import { IngestApi } from './ingest-api';
+import { loadRunOverviews } from './run-overview';
+import { reductionStateLabels, runKindLabels, testStateLabels } from './run-labels';
+
+/** One test: its runs with kind, newest reduction state, point count, warnings and a C_D-versus-yaw sketch. */
+@Component({
+  selector: 'tw-test-page',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [RouterLink, MatButtonModule, MatChipsModule, MatIconModule, MatProgressBarModule, MatTableModule, CdYawChart, EmptyState, ErrorBanner, SafetyNotice],
+  templateUrl: './test-page.html',
+  styles: `
+    :host {
+      display: block;
+      padding: 16px 24px;
+    }
+    .heading {
+      display: flex;
+      align-items: center;
+      gap: 16px;
+      flex-wrap: wrap;
+    }
+    .heading h1 {
+      flex: 1 1 auto;
+    }
+    table {
+      width: 100%;
+    }
+    .caution {
+      font: var(--mat-sys-body-small);
+      margin-top: 16px;
+    }
+  `,
+})
+export class TestPage {
+  /** Route parameter: the test's id. */
+  readonly id = input.required<string>();
+
+  private readonly api = inject(IngestApi);
+  private readonly role = inject(AuthService).role;
+
+  /** Whether the caller is laboratory staff (customers see runs, not reductions, until approval). */
+  protected readonly isStaff = computed(() => this.role() !== 'customer' && this.role() !== null);
+  protected readonly isTechnician = computed(() => this.role() === 'technician' || this.role() === 'lab_manager');
+  protected readonly test = rxResource({ params: () => this.id(), stream: ({ params }) => this.api.test(params) });
+  protected readonly runs = rxResource({
+    params: () => ({ id: this.id(), staff: this.isStaff() }),
+    stream: ({ params }) => loadRunOverviews(this.api, params.id, params.staff),
+  });
+  protected readonly columns = computed(() =>
+    this.isStaff() ? ['runNumber', 'kind', 'configuration', 'state', 'points', 'warnings', 'chart'] : ['runNumber', 'kind', 'configuration', 'files'],
+  );
+  protected readonly title = computed(() => (this.test.hasValue() ? this.test.value().title : 'Test'));
+  protected readonly testState = computed(() => (this.test.hasValue() ? testStateLabels[this.test.value().state] : ''));
+  protected readonly caution = computed(() => (this.runs.hasValue() ? this.runs.value() : []).find((row) => row.latest)?.latest?.caution ?? '');
+  protected readonly kindLabel = (kind: RunKind) => runKindLabels[kind];
+  protected readonly stateLabel = (state: ReductionState) => reductionStateLabels[state];
+  protected readonly message = (error: unknown, what: string) => problemMessage(error, `The ${what} could not be loaded.`);
+}

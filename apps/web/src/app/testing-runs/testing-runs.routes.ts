@@ -1,0 +1,28 @@
+import { Routes } from '@angular/router';
+import { roleGuard } from '../core/role-guard';
+
+/** Tests, their runs, uploads and reductions; customers see their own tests read-only. */
+export const testingRunsRoutes: Routes = [
+  {
+    path: 'tests',
+    title: 'Tests · Tunnelwright',
+    loadComponent: () => import('./tests-page').then((m) => m.TestsPage),
+  },
+  {
+    path: 'tests/:id',
+    title: 'Test · Tunnelwright',
+    loadComponent: () => import('./test-page').then((m) => m.TestPage),
+  },
+  {
+    path: 'tests/:id/upload',
+    title: 'Upload run files · Tunnelwright',
+    canActivate: [roleGuard(['technician', 'lab_manager'])],
+    loadComponent: () => import('./upload-page').then((m) => m.UploadPage),
+  },
+  {
+    path: 'runs/:id',
+    title: 'Run · Tunnelwright',
+    canActivate: [roleGuard(['technician', 'analyst', 'lab_manager'])],
+    loadComponent: () => import('./run-page').then((m) => m.RunPage),
+  },
+];
