@@ -161,6 +161,8 @@ describe('/api/bookings', () => {
       expect((await t.knex('bookings').where({ id: first.body.id }).first()).state).toBe('expired');
       const audit = await t.knex('audit_entries').where({ entity: 'booking', entityId: first.body.id }).orderBy('createdAt');
       expect(audit.map((a: { action: string }) => a.action)).toEqual(['booking.requested', 'booking.expired']);
+      const mail = await waitForBookingMail(t.config.mailDir, rival.email, /Booking hold expired/, { textIncludes: first.body.id });
+      expect(mail.text).toMatch(/the provisional hold lapsed/);
     });
 
     it('with a plan of the caller’s organisation → 201 and the plan names the booking; another organisation’s plan → 400 on planId', async () => {

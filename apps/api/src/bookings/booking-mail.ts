@@ -19,7 +19,8 @@ export type BookingEvent =
   | 'technician_assigned'
   | 'in_test'
   | 'completed'
-  | 'cancelled';
+  | 'cancelled'
+  | 'expired';
 
 /** The words of one event: a subject, what happened, and what to do next, for each side. */
 interface EventWording {
@@ -120,6 +121,13 @@ function wording(event: BookingEvent, booking: Booking, timeZone: string, wasCon
         happened: 'Testing is complete.',
         customerNext: 'Certified result sheets appear in Tunnelwright once an analyst approves them. Collect your articles from the lab.',
         labNext: 'Reduce and approve the runs.',
+      };
+    case 'expired':
+      return {
+        subject: 'Booking hold expired',
+        happened: 'Nobody answered in time, so the provisional hold lapsed and the slot is free again.',
+        customerNext: 'Make a new request if you still need tunnel time.',
+        labNext: 'Nothing more to do.',
       };
     case 'cancelled': {
       const fee = booking.cancellationFeeMinor ?? 0;

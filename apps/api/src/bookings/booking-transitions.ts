@@ -109,6 +109,8 @@ export async function transitionBooking(deps: AppDeps, caller: User, id: string,
     });
   const outcome = spec.requestedPeriod ? await withClashCheck(deps.knex, tunnelId || (await tunnelOf(deps.knex, id)), spec.requestedPeriod, context.timeZone, run) : await run();
   if (outcome === 'lapsed') {
+    const expired = await loadBooking(deps.knex, id);
+    if (expired) await mailQuietly(deps, expired, 'expired', context, false, log);
     throw new HttpError(409, 'Hold expired', 'The provisional hold on this booking lapsed before anybody answered, so the booking has expired and its slot is free. Make a new request.');
   }
   const booking = await loadBooking(deps.knex, id);

@@ -117,6 +117,7 @@ export const bookingRoutes: RouteDef[] = [
       const period = instantsOf(body);
       assertFuture(period.start);
       const context = await loadLabBookingContext(deps.knex);
+      let lapsed: string[] = [];
       const id = await withClashCheck(deps.knex, body.tunnelId, period, context.timeZone, () =>
         deps.knex.transaction(async (trx) => {
           const tunnel = await Tunnel.query(trx).findById(body.tunnelId);
@@ -128,7 +129,7 @@ export const bookingRoutes: RouteDef[] = [
           const plan = body.planId ? await Plan.query(trx).findById(body.planId).forUpdate() : undefined;
           if (body.planId && (!plan || plan.organisationId !== caller.organisationId)) throw HttpError.field('planId', 'Choose one of your saved plans');
           // Lapsed holds on this tunnel must not block the new request, even between sweeps.
-          await expireLapsedHolds(trx, { tunnelId: tunnel.id });
+          lapsed = await expireLapsedHolds(trx, { tunnelId: tunnel.id });
           const booking = await Booking.query(trx).insert({
             organisationId: caller.organisationId,
             tunnelId: tunnel.id,
@@ -152,6 +153,10 @@ export const bookingRoutes: RouteDef[] = [
       const booking = await loadBooking(deps.knex, id);
       if (!booking) throw HttpError.notFound('The booking');
       await mailQuietly(deps, booking, 'requested', context, false, req.log);
+      for (const expiredId of lapsed) {
+        const expired = await loadBooking(deps.knex, expiredId);
+        if (expired) await mailQuietly(deps, expired, 'expired', context, false, req.log);
+      }
       res.status(201).json(toBooking(booking, context.timeZone));
     },
   }),
