@@ -160,6 +160,19 @@ describe('ingest: uploads, versions and the outbox', () => {
       expect(bad.body.valid).toBe(false);
       expect(bad.body.issues[0]).toMatchObject({ code: 'RAGGED_ROW', line: 2, fileName: 'bad.csv' });
     });
+
+    it('tries an import profile: a semicolon file with decimal commas reads once the profile says so', async () => {
+      const semi = Buffer.from(`${HEADER.replaceAll(', ', ';')}\n${validRows(2, 3).map((row) => row.replaceAll(', ', ';').replaceAll('.', ',')).join('\n')}\n`);
+      const without = await request(w.t.app).post('/api/runs/preview').set(auth(w.technician.token)).attach('file', semi, 'semi.csv');
+      expect(without.body.issues[0]).toMatchObject({ code: 'DECIMAL_COMMA', line: 2 });
+      const profile = JSON.stringify({ name: 'semicolon, decimal comma', delimiter: ';', decimalComma: true });
+      const withProfile = await request(w.t.app).post('/api/runs/preview').set(auth(w.technician.token)).field('profile', profile).attach('file', semi, 'semi.csv');
+      expect(withProfile.status, JSON.stringify(withProfile.body)).toBe(200);
+      expect(withProfile.body).toMatchObject({ valid: true, sampleCount: 6, pointCount: 2 });
+      const broken = await request(w.t.app).post('/api/runs/preview').set(auth(w.technician.token)).field('profile', '{"delimiter":","').attach('file', semi, 'semi.csv');
+      expect(broken.status).toBe(400);
+      expect(broken.body.errors[0].field).toBe('profile');
+    });
   });
 
   describe('raw files are immutable', () => {

@@ -1,5 +1,5 @@
 import { createReadStream } from 'node:fs';
-import { readRunFile, RunFileError, type RunFileHeader } from '@tunnelwright/aero';
+import { applyImportProfile, readRunFile, RunFileError, type ImportProfile, type RunFileHeader } from '@tunnelwright/aero';
 import type { Preview } from '@tunnelwright/contracts';
 
 /** How many rows a preview shows. */
@@ -7,9 +7,10 @@ export const previewRowCount = 20;
 
 /**
  * Reads a spooled upload with the run-file reader and reports what it understood: the header, the first
- * rows (SI units), the number of rows and points, or every issue found with its line and column.
+ * rows (SI units), the number of rows and points, or every issue found with its line and column. With an
+ * import profile the file is first rewritten by it, line for line, so issues keep the file's line numbers.
  */
-export async function previewUpload(path: string, fileName: string): Promise<Preview> {
+export async function previewUpload(path: string, fileName: string, profile?: ImportProfile): Promise<Preview> {
   let header: RunFileHeader | undefined;
   const firstSamples: Record<string, unknown>[] = [];
   const points = new Set<number>();
@@ -22,7 +23,8 @@ export async function previewUpload(path: string, fileName: string): Promise<Pre
     delimiter: h.delimiter,
   });
   try {
-    await readRunFile(createReadStream(path), {
+    const bytes = createReadStream(path);
+    await readRunFile(profile ? applyImportProfile(bytes, profile, fileName) : bytes, {
       fileName,
       onHeader: (h) => {
         header = h;

@@ -1,5 +1,5 @@
 import { compareQuerySchema, reductionOverridesSchema, uploadFieldsSchema } from '@tunnelwright/contracts';
-import { DESIGN_CAUTION } from '@tunnelwright/aero';
+import { DESIGN_CAUTION, parseImportProfile, type ImportProfile } from '@tunnelwright/aero';
 import { RawFile, Reduction, ReductionPoint, Run, scopeToCaller, TestRecord } from '@tunnelwright/db';
 import { pipeline } from 'node:stream/promises';
 import { z } from 'zod';
@@ -28,13 +28,21 @@ export const runRoutes: RouteDef[] = [
     method: 'post',
     path: '/preview',
     access: staff,
-    summary: 'Check a run file without keeping it: header, first rows, or every issue with line and column',
+    summary: 'Check a run file without keeping it (optionally through an import profile, multipart `profile` JSON): header, first rows, or every issue with line and column',
     sample: { expect: 400 },
     handler: async ({ req, res, deps }) => {
       const services = ingestServices(deps);
       const upload = await receiveUpload(req, res, { dir: services.uploadDir, limitBytes: services.uploadLimitBytes });
       try {
-        res.json(await previewUpload(upload.path, upload.originalName));
+        let profile: ImportProfile | undefined;
+        if (upload.fields.profile) {
+          try {
+            profile = parseImportProfile(JSON.parse(upload.fields.profile));
+          } catch (error) {
+            throw HttpError.field('profile', error instanceof SyntaxError ? 'The import profile must be JSON' : (error as Error).message);
+          }
+        }
+        res.json(await previewUpload(upload.path, upload.originalName, profile));
       } finally {
         await upload.discard();
       }
