@@ -54,15 +54,15 @@ describe('booking tunnel time', () => {
     await customerPage.getByRole('link', { name: 'Request tunnel time' }).first().click();
     await customerPage.getByRole('heading', { name: 'Request tunnel time' }).waitFor();
     await customerPage.getByRole('button', { name: 'Send request' }).click();
-    await customerPage.getByText('Choose a tunnel').waitFor();
+    await customerPage.getByText('Choose a tunnel', { exact: true }).waitFor();
     await customerPage.getByText('Name the article').waitFor();
 
     await customerPage.getByRole('combobox', { name: 'Tunnel' }).click();
     await customerPage.getByRole('option', { name: 'Tunnel 1 — closed section' }).click();
     await customerPage.getByRole('combobox', { name: 'Service' }).click();
     await customerPage.getByRole('option', { name: 'Full-day tunnel block' }).click();
-    await customerPage.getByLabel('Start').fill(`${day}T09:00`);
-    await customerPage.getByLabel('End').fill(`${day}T17:00`);
+    await customerPage.getByLabel('Start', { exact: true }).fill(`${day}T09:00`);
+    await customerPage.getByLabel('End', { exact: true }).fill(`${day}T17:00`);
     await customerPage.getByLabel('Article name').fill(article);
     // The keyboard, as a user tabbing through the article row would.
     await customerPage.getByRole('combobox', { name: 'Coefficients based on' }).focus();
@@ -115,5 +115,34 @@ describe('booking tunnel time', () => {
     await mail.waitFor();
     await mail.click();
     await mail.getByText(/booking\.ics \(text\/calendar/).waitFor();
+  });
+
+  it('a lab manager blocks a tunnel for maintenance on the calendar after the form explains what is missing, then removes it after confirming', async () => {
+    const reason = `Fan bearing inspection ${Date.now().toString(36)}`;
+    const day = DateTime.now().plus({ days: 5 }).toFormat('yyyy-LL-dd');
+    const page = await browser.freshPage();
+    await signIn(page, api.baseUrl, userOf('lab_manager').email);
+    await openSection(page, 'Calendar', 'Calendar');
+    await page.getByRole('table', { name: 'Calendar by tunnel' }).waitFor();
+    await page.getByText('Month', { exact: true }).click();
+    await page.getByRole('table', { name: 'Calendar by day' }).waitFor();
+
+    await page.getByRole('button', { name: 'Block a tunnel…' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByRole('button', { name: 'Block the tunnel' }).click();
+    await dialog.getByText('Say what the maintenance is').waitFor();
+    await dialog.getByRole('combobox', { name: 'Tunnel' }).click();
+    await page.getByRole('option', { name: 'Tunnel 2 — open jet' }).click();
+    await dialog.getByLabel('Start', { exact: true }).fill(`${day}T08:00`);
+    await dialog.getByLabel('End', { exact: true }).fill(`${day}T12:00`);
+    await dialog.getByLabel('What is the maintenance?').fill(reason);
+    await dialog.getByRole('button', { name: 'Block the tunnel' }).click();
+    await page.getByText('Tunnel blocked for maintenance.').waitFor();
+    await page.getByRole('listitem').filter({ hasText: reason }).waitFor();
+
+    await page.getByRole('button', { name: `Remove maintenance: ${reason}` }).click();
+    await page.getByRole('dialog').getByRole('button', { name: 'Remove' }).click();
+    await page.getByText('Maintenance block removed.').waitFor();
+    await page.getByRole('listitem').filter({ hasText: reason }).waitFor({ state: 'detached' });
   });
 });

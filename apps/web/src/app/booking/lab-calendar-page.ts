@@ -4,23 +4,28 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatDialog } from '@angular/material/dialog';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
-import { slotHoldingStates } from '@tunnelwright/contracts';
+import { slotHoldingStates, type MaintenanceBlock } from '@tunnelwright/contracts';
 import { DateTime } from 'luxon';
 import { CatalogueApi } from '../core/catalogue-api';
 import { problemMessage } from '../core/problem-message';
+import { ConfirmDialog, ConfirmDialogData } from '../shared/confirm-dialog';
+import { EmptyState } from '../shared/empty-state';
 import { ErrorBanner } from '../shared/error-banner';
 import { BookingApi } from './booking-api';
 import { bookingStateLabels } from './booking-state-labels';
 import { monthDays, weekDays } from './calendar-days';
 import { CalendarEntry, CalendarGrid } from './calendar-grid';
-import { userTimeZone } from './lab-time';
+import { formatPeriod, userTimeZone } from './lab-time';
+import { MaintenanceBlockDialog, MaintenanceBlockDialogData } from './maintenance-block-dialog';
 
 /** Lab managers' calendar of every tunnel for a week or a month, in the lab's zone. */
 @Component({
   selector: 'tw-lab-calendar-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [RouterLink, MatButtonModule, MatButtonToggleModule, MatIconModule, MatProgressBarModule, ErrorBanner, CalendarGrid],
+  imports: [RouterLink, MatButtonModule, MatButtonToggleModule, MatIconModule, MatProgressBarModule, ErrorBanner, EmptyState, CalendarGrid],
   template: `
     <section class="tw-page">
       <header class="tw-page-header">
@@ -51,6 +56,24 @@ import { userTimeZone } from './lab-time';
           }
         </p>
         <tw-calendar-grid [days]="days()" [lanes]="lanes()" [entries]="entries()" [timeZone]="zone" />
+        <header class="maintenance-header">
+          <h2>Maintenance blocks</h2>
+          <button mat-stroked-button type="button" (click)="addMaintenance(zone)">Block a tunnel…</button>
+        </header>
+        @if (maintenanceError(); as message) {
+          <tw-error-banner [message]="message" (retry)="maintenance.reload()" />
+        }
+        <ul class="blocks">
+          @for (block of blocks(); track block.id) {
+            <li>
+              <span>{{ tunnelName(block.tunnelId) }}: {{ periodOf(block) }} — {{ block.reason }}</span>
+              <button mat-button type="button" [attr.aria-label]="'Remove maintenance: ' + block.reason" (click)="removeMaintenance(block)">Remove</button>
+            </li>
+          }
+        </ul>
+        @if (maintenance.hasValue() && blocks().length === 0) {
+          <tw-empty-state icon="build" title="No maintenance blocked" hint="Block a tunnel to keep it out of bookings." />
+        }
       }
     </section>
   `,
@@ -65,6 +88,16 @@ import { userTimeZone } from './lab-time';
     .title {
       font: var(--mat-sys-title-medium);
     }
+    .maintenance-header {
+      display: flex;
+      align-items: center;
+      gap: 16px;
+    }
+    .blocks li {
+      display: flex;
+      align-items: center;
+      gap: 8px;
+    }
     .zone {
       color: var(--mat-sys-on-surface-variant);
     }
@@ -73,6 +106,8 @@ import { userTimeZone } from './lab-time';
 export class LabCalendarPage {
   private readonly api = inject(BookingApi);
   private readonly catalogue = inject(CatalogueApi);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
 
   protected readonly viewerZone = userTimeZone();
   protected readonly view = signal<'week' | 'month'>('week');
@@ -80,6 +115,9 @@ export class LabCalendarPage {
   protected readonly bookings = rxResource({ stream: () => this.api.list() });
   protected readonly tunnels = rxResource({ stream: () => this.catalogue.tunnels() });
   protected readonly settings = rxResource({ stream: () => this.api.settings() });
+  protected readonly maintenance = rxResource({ stream: () => this.api.maintenanceBlocks() });
+  protected readonly blocks = computed(() => (this.maintenance.hasValue() ? this.maintenance.value() : []));
+  protected readonly maintenanceError = computed(() => (this.maintenance.error() ? 'The maintenance blocks could not be loaded.' : null));
   protected readonly zone = computed(() => (this.settings.hasValue() ? this.settings.value().timeZone : null));
   protected readonly loadError = computed(() => {
     const error = this.bookings.error() ?? this.tunnels.error() ?? this.settings.error();
@@ -97,8 +135,49 @@ export class LabCalendarPage {
   protected readonly entries = computed<CalendarEntry[]>(() =>
     (this.bookings.hasValue() ? this.bookings.value() : [])
       .filter((b) => slotHoldingStates.includes(b.state) || b.state === 'completed')
-      .map((b) => ({ laneId: b.tunnelId, period: b.period, label: `${b.organisationName} · ${bookingStateLabels[b.state]}`, kind: 'booking' })),
+      .map((b): CalendarEntry => ({ laneId: b.tunnelId, period: b.period, label: `${b.organisationName} · ${bookingStateLabels[b.state]}`, kind: 'booking' }))
+      .concat(this.blocks().map((block): CalendarEntry => ({ laneId: block.tunnelId, period: block.period, label: `Maintenance: ${block.reason}`, kind: 'maintenance' }))),
   );
+
+  protected tunnelName(id: string): string {
+    return this.lanes().find((lane) => lane.id === id)?.name ?? 'Unknown tunnel';
+  }
+
+  protected periodOf(block: MaintenanceBlock): string {
+    return formatPeriod(block.period, block.timeZone);
+  }
+
+  protected addMaintenance(timeZone: string): void {
+    const data: MaintenanceBlockDialogData = { tunnels: this.lanes(), timeZone };
+    this.dialog
+      .open(MaintenanceBlockDialog, { data, width: '560px' })
+      .afterClosed()
+      .subscribe((block: MaintenanceBlock | undefined) => {
+        if (block) {
+          this.snackBar.open('Tunnel blocked for maintenance.', undefined, { duration: 4000 });
+          this.maintenance.reload();
+        }
+      });
+  }
+
+  protected removeMaintenance(block: MaintenanceBlock): void {
+    const data: ConfirmDialogData = { title: 'Remove this maintenance block?', message: `${this.tunnelName(block.tunnelId)} becomes bookable again for ${this.periodOf(block)}.`, confirmLabel: 'Remove', destructive: true };
+    this.dialog
+      .open(ConfirmDialog, { data, width: '440px' })
+      .afterClosed()
+      .subscribe((confirmed: boolean | undefined) => {
+        if (!confirmed) {
+          return;
+        }
+        this.api.deleteMaintenanceBlock(block.id).subscribe({
+          next: () => {
+            this.snackBar.open('Maintenance block removed.', undefined, { duration: 4000 });
+            this.maintenance.reload();
+          },
+          error: (error: unknown) => this.snackBar.open(problemMessage(error, 'The maintenance block could not be removed.'), 'Dismiss', { duration: 8000 }),
+        });
+      });
+  }
 
   protected now(): DateTime {
     return DateTime.now();
@@ -112,5 +191,6 @@ export class LabCalendarPage {
     this.bookings.reload();
     this.tunnels.reload();
     this.settings.reload();
+    this.maintenance.reload();
   }
 }

@@ -1,0 +1,124 @@
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import type { MaintenanceBlock } from '@tunnelwright/contracts';
+import { problemMessage } from '../core/problem-message';
+import { ErrorBanner } from '../shared/error-banner';
+import { BookingApi } from './booking-api';
+import { CalendarLane } from './calendar-grid';
+import { labInstant } from './lab-time';
+
+/** What the maintenance dialog needs: the tunnels and the lab's zone. */
+export interface MaintenanceBlockDialogData {
+  readonly tunnels: readonly CalendarLane[];
+  readonly timeZone: string;
+}
+
+/** A lab manager blocks a tunnel for maintenance; the API refuses a period that clashes with a booking. */
+@Component({
+  selector: 'tw-maintenance-block-dialog',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ErrorBanner],
+  template: `
+    <h2 mat-dialog-title>Block a tunnel for maintenance</h2>
+    <mat-dialog-content>
+      <p>Times are in the lab's zone, {{ data.timeZone }}.</p>
+      <form [formGroup]="form" class="fields">
+        <mat-form-field class="wide">
+          <mat-label>Tunnel</mat-label>
+          <mat-select formControlName="tunnelId" required>
+            @for (tunnel of data.tunnels; track tunnel.id) {
+              <mat-option [value]="tunnel.id">{{ tunnel.name }}</mat-option>
+            }
+          </mat-select>
+          @if (form.controls.tunnelId.invalid) {
+            <mat-error>Choose a tunnel</mat-error>
+          }
+        </mat-form-field>
+        <mat-form-field>
+          <mat-label>Start</mat-label>
+          <input matInput type="datetime-local" formControlName="start" required />
+          @if (form.controls.start.invalid) {
+            <mat-error>Choose the start</mat-error>
+          }
+        </mat-form-field>
+        <mat-form-field>
+          <mat-label>End</mat-label>
+          <input matInput type="datetime-local" formControlName="end" required />
+          @if (form.controls.end.invalid) {
+            <mat-error>Choose the end</mat-error>
+          }
+        </mat-form-field>
+        <mat-form-field class="wide">
+          <mat-label>What is the maintenance?</mat-label>
+          <textarea matInput formControlName="reason" rows="2" maxlength="2000" required></textarea>
+          @if (form.controls.reason.invalid) {
+            <mat-error>Say what the maintenance is</mat-error>
+          }
+        </mat-form-field>
+      </form>
+      @if (orderError()) {
+        <p class="error" role="alert">The end must be after the start.</p>
+      }
+      @if (sendError(); as message) {
+        <tw-error-banner [message]="message" [retryable]="false" />
+      }
+    </mat-dialog-content>
+    <mat-dialog-actions align="end">
+      <button mat-button type="button" mat-dialog-close>Close</button>
+      <button mat-flat-button type="button" [disabled]="sending()" (click)="save()">Block the tunnel</button>
+    </mat-dialog-actions>
+  `,
+  styles: `
+    .fields {
+      display: flex;
+      flex-wrap: wrap;
+      gap: 12px;
+    }
+    .wide {
+      width: 100%;
+    }
+    .error {
+      color: var(--mat-sys-error);
+    }
+  `,
+})
+export class MaintenanceBlockDialog {
+  private readonly api = inject(BookingApi);
+  private readonly dialogRef = inject<MatDialogRef<MaintenanceBlockDialog, MaintenanceBlock>>(MatDialogRef);
+  protected readonly data = inject<MaintenanceBlockDialogData>(MAT_DIALOG_DATA);
+
+  protected readonly form = new FormGroup({
+    tunnelId: new FormControl<string | null>(null, Validators.required),
+    start: new FormControl('', { nonNullable: true, validators: Validators.required }),
+    end: new FormControl('', { nonNullable: true, validators: Validators.required }),
+    reason: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(2000)] }),
+  });
+  protected readonly orderError = signal(false);
+  protected readonly sending = signal(false);
+  protected readonly sendError = signal<string | null>(null);
+
+  protected save(): void {
+    const { tunnelId, start, end, reason } = this.form.getRawValue();
+    const from = labInstant(start, this.data.timeZone);
+    const to = labInstant(end, this.data.timeZone);
+    this.orderError.set(Boolean(from && to && Date.parse(to) <= Date.parse(from)));
+    if (this.form.invalid || !tunnelId || !from || !to || this.orderError()) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.sending.set(true);
+    this.sendError.set(null);
+    this.api.createMaintenanceBlock({ tunnelId, start: from, end: to, reason: reason.trim() }).subscribe({
+      next: (block) => this.dialogRef.close(block),
+      error: (error: unknown) => {
+        this.sending.set(false);
+        this.sendError.set(problemMessage(error, 'The tunnel could not be blocked.'));
+      },
+    });
+  }
+}
