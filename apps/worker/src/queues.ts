@@ -15,7 +15,12 @@ export const queueNames = {
 export const housekeepingJobs = {
   /** Deletes expired refresh tokens and used or expired single-use link tokens. */
   purgeExpiredTokens: 'purge-expired-tokens',
+  /** Flips provisional booking holds whose hold time has run out to expired, freeing their slots. */
+  expireLapsedHolds: 'expire-lapsed-holds',
 } as const;
 
 /** How often the token purge runs, in milliseconds (hourly). */
 export const purgeExpiredTokensEveryMs = 60 * 60 * 1000;
+
+/** How often lapsed booking holds are swept, in milliseconds (every five minutes). */
+export const expireLapsedHoldsEveryMs = 5 * 60 * 1000;

@@ -1,5 +1,5 @@
 import { randomBytes, randomUUID } from 'node:crypto';
-import { createKnex, Organisation, RefreshToken, User, UserToken } from '@tunnelwright/db';
+import { createKnex, Organisation, RefreshToken, Tunnel, User, UserToken } from '@tunnelwright/db';
 import { QueueEvents, type Job } from 'bullmq';
 import { Redis } from 'ioredis';
 import type { Knex } from 'knex';
@@ -119,7 +119,9 @@ describe('housekeeping worker', () => {
   describe('the housekeeping queue', () => {
     it('registers one repeatable purge, however often the schedule is upserted', async () => {
       const schedulers = await running.housekeepingQueue.getJobSchedulers();
-      expect(schedulers.map((scheduler) => scheduler.key)).toEqual([housekeepingJobs.purgeExpiredTokens]);
+      expect(schedulers.map((scheduler) => scheduler.key).sort()).toEqual(
+        [housekeepingJobs.expireLapsedHolds, housekeepingJobs.purgeExpiredTokens].sort(),
+      );
     });
 
     it('runs a purge job through Redis and reports what it deleted', async () => {
@@ -132,6 +134,54 @@ describe('housekeeping worker', () => {
         refresh: ['refresh rotated, not expired', 'refresh valid'],
         link: ['link valid'],
       });
+    });
+
+    it('expires a booking hold whose time has run out, and leaves a live hold alone', async () => {
+      const tunnel = await Tunnel.query(knex).insert({
+        name: `Housekeeping tunnel ${randomUUID()}`,
+        kind: 'closed',
+        description: '',
+        width: 2,
+        height: 1.5,
+        area: 2.9,
+        length: 4.5,
+        minSpeed: 0,
+        maxSpeed: 50,
+        pressureGradient: 0,
+        shapeFactor: 0.86,
+        openJetConstants: {},
+        capabilities: {},
+      });
+      const organisationId = (await User.query(knex).findById(userId))!.organisationId;
+      const booking = (period: string, holdExpiresAt: Date) => ({
+        organisation_id: organisationId,
+        tunnel_id: tunnel.id,
+        requested_by: userId,
+        period,
+        state: 'requested',
+        hold_expires_at: holdExpiresAt,
+        ics_uid: `${randomUUID()}@housekeeping.test`,
+      });
+      const [lapsed] = await knex('bookings')
+        .insert(booking('[2031-03-03 09:00Z,2031-03-03 13:00Z)', new Date(Date.now() - hour)))
+        .returning('id');
+      const [live] = await knex('bookings')
+        .insert(booking('[2031-03-04 09:00Z,2031-03-04 13:00Z)', new Date(Date.now() + hour)))
+        .returning('id');
+      try {
+        const job = await running.housekeepingQueue.add(housekeepingJobs.expireLapsedHolds, {});
+        const result = (await job.waitUntilFinished(events, 30_000)) as { expired: number };
+        expect(result.expired).toBeGreaterThanOrEqual(1);
+        const states = await knex('bookings').whereIn('id', [lapsed.id, live.id]).select('id', 'state');
+        expect(Object.fromEntries(states.map((row: { id: string; state: string }) => [row.id, row.state]))).toEqual({
+          [lapsed.id]: 'expired',
+          [live.id]: 'requested',
+        });
+      } finally {
+        await knex('bookings').whereIn('id', [lapsed.id, live.id]).delete();
+        await knex('audit_log').where('entity_id', lapsed.id).delete().catch(() => undefined);
+        await Tunnel.query(knex).deleteById(tunnel.id);
+      }
     });
 
     it('fails a job with an unknown name at once, without retrying it', async () => {

@@ -1,5 +1,5 @@
 import type { Queue } from 'bullmq';
-import { housekeepingJobs, purgeExpiredTokensEveryMs } from '../queues';
+import { expireLapsedHoldsEveryMs, housekeepingJobs, purgeExpiredTokensEveryMs } from '../queues';
 
 /**
  * Registers the repeatable housekeeping jobs. Upserting by a fixed scheduler id keeps exactly one schedule
@@ -11,6 +11,15 @@ export async function scheduleHousekeeping(queue: Queue, everyMs: number = purge
     { every: everyMs },
     {
       name: housekeepingJobs.purgeExpiredTokens,
+      data: {},
+      opts: { attempts: 3, backoff: { type: 'exponential', delay: 10_000 }, removeOnComplete: 100, removeOnFail: 500 },
+    },
+  );
+  await queue.upsertJobScheduler(
+    housekeepingJobs.expireLapsedHolds,
+    { every: expireLapsedHoldsEveryMs },
+    {
+      name: housekeepingJobs.expireLapsedHolds,
       data: {},
       opts: { attempts: 3, backoff: { type: 'exponential', delay: 10_000 }, removeOnComplete: 100, removeOnFail: 500 },
     },
