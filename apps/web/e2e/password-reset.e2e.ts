@@ -33,6 +33,9 @@ describe('forgotten password and profile', () => {
     let page = await browser.freshPage();
     await page.goto(`${api.baseUrl}/sign-in`);
     await page.getByRole('link', { name: 'Forgotten your password?' }).click();
+    // The page is lazy-loaded: typing before it has replaced the sign-in form would fill the wrong field.
+    await page.waitForURL(/\/forgot-password$/);
+    await page.getByText('Enter the e-mail you sign in with').waitFor();
     await page.getByLabel('E-mail').fill(customer.email);
     await page.getByRole('button', { name: 'Send link' }).click();
     await page.getByText('If an account uses that address').waitFor();
