@@ -214,6 +214,42 @@ export const uploadFieldsSchema = z.object({
       }
     })
     .pipe(reductionOverridesSchema),
+  /** A saved import profile of the lab to read the file through; the raw file stays the bytes sent. */
+  profileId: z.uuid({ message: 'Choose a saved import profile' }).optional(),
+});
+
+/** Multipart fields of a preview beside the `file` part: an import profile as JSON, or a saved one. */
+export const previewFieldsSchema = z.object({
+  profile: z.string().optional(),
+  profileId: z.uuid({ message: 'Choose a saved import profile' }).optional(),
+});
+
+/**
+ * Multipart fields of saving an import profile beside the `file` part, a sample file the profile must
+ * read without issues: `profile` is the ImportProfile as a JSON string.
+ */
+export const importProfileFieldsSchema = z.object({
+  name: text(120).min(1, { message: 'Enter a name' }),
+  description: text(2000).default(''),
+  profile: z.string({ message: 'Give the import profile as JSON' }).min(1, { message: 'Give the import profile as JSON' }),
+});
+
+/** A saved import profile of the lab. */
+export const savedImportProfileSchema = z.object({
+  id: z.uuid(),
+  name: z.string(),
+  description: z.string(),
+  profile: z.record(z.string(), z.unknown()),
+  createdBy: z.uuid(),
+  archived: z.boolean(),
+  createdAt: z.iso.datetime(),
+  updatedAt: z.iso.datetime(),
+});
+export type SavedImportProfile = z.infer<typeof savedImportProfileSchema>;
+
+export const importProfileListQuerySchema = z.object({
+  /** Whether archived profiles are listed too. */
+  archived: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
 });
 
 export const reductionErrorSchema = z.object({

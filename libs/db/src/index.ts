@@ -31,3 +31,4 @@ export { QuoteLine } from './models/quote-line';
 export { BookingAttachment } from './models/booking-attachment';
 export { MaintenanceBlock } from './models/maintenance-block';
 export { expireLapsedHolds } from './booking-holds';
+export { ImportProfile } from './models/import-profile';

@@ -1,6 +1,6 @@
 import { createReadStream } from 'node:fs';
 import type { ReductionOverrides } from '@tunnelwright/contracts';
-import { RawFile, recordAudit, type Reduction, type User } from '@tunnelwright/db';
+import { RawFile, recordAudit, Reduction, type User } from '@tunnelwright/db';
 import { UniqueViolationError } from 'objection';
 import type { AppDeps } from '../deps';
 import { HttpError } from '../errors/http-error';
@@ -10,6 +10,7 @@ import { ingestServices } from './ingest-services';
 import { loadRunForReduction, reducedRunKinds } from './load-run';
 import { queueReduction } from './queue-reduction';
 import type { ReceivedUpload } from './receive-upload';
+import type { UsedImportProfile } from './saved-import-profile';
 
 /** The same bytes are already stored for this run. */
 export class DuplicateUploadError extends Error {
@@ -29,9 +30,10 @@ export interface StoredUpload {
  * Keeps an upload of a run: refuses an overdue calibration (409) or an unreducible configuration (400)
  * before anything is kept, refuses bytes already stored for the run (`DuplicateUploadError`), puts the
  * bytes in the raw store, then writes the raw-file row, the queued reduction and its outbox message in
- * one transaction, and only after commit hands the message to the queue.
+ * one transaction, and only after commit hands the message to the queue. With `importProfile` the
+ * reduction reads the bytes through that saved profile; the stored raw file is still the bytes received.
  */
-export async function storeUpload(deps: AppDeps, runId: string, upload: ReceivedUpload, overrides: ReductionOverrides, caller: User): Promise<StoredUpload> {
+export async function storeUpload(deps: AppDeps, runId: string, upload: ReceivedUpload, overrides: ReductionOverrides, caller: User, importProfile?: UsedImportProfile): Promise<StoredUpload> {
   const run = await loadRunForReduction(runId);
   const reduce = reducedRunKinds.has(run.kind);
   const calibration = reduce ? await requireUsableCalibration(deps.knex, run.test) : undefined;
@@ -54,9 +56,9 @@ export async function storeUpload(deps: AppDeps, runId: string, upload: Received
       const rawFile = await RawFile.query(trx)
         .insert({ runId: run.id, originalName: upload.originalName, size: stored.size, sha256: stored.sha256, storageKey: stored.key, uploadedBy: caller.id })
         .returning('*');
-      await recordAudit(trx, { actorId: caller.id, action: 'run.file_uploaded', entity: 'run', entityId: run.id, after: { rawFileId: rawFile.id, originalName: rawFile.originalName, size: rawFile.size, sha256: rawFile.sha256 } });
+      await recordAudit(trx, { actorId: caller.id, action: 'run.file_uploaded', entity: 'run', entityId: run.id, after: { rawFileId: rawFile.id, originalName: rawFile.originalName, size: rawFile.size, sha256: rawFile.sha256, importProfileId: importProfile?.id ?? null } });
       if (!config || !calibration) return { rawFile, reduction: null };
-      const queued = await queueReduction(trx, { runId: run.id, rawFileId: rawFile.id, inputSha256: rawFile.sha256, config, calibration, createdBy: caller.id });
+      const queued = await queueReduction(trx, { runId: run.id, rawFileId: rawFile.id, inputSha256: rawFile.sha256, config, calibration, createdBy: caller.id, importProfile });
       outboxId = queued.outboxId;
       return { rawFile, reduction: queued.reduction };
     });
@@ -77,7 +79,8 @@ export async function storeUpload(deps: AppDeps, runId: string, upload: Received
 
 /**
  * Queues a new reduction version of a run's raw file (the newest unless `rawFileId` is given) with the
- * current test settings and `overrides`; earlier versions stay as they are.
+ * current test settings and `overrides`; earlier versions stay as they are. A raw file first reduced
+ * through an import profile is read through the same recorded profile again.
  */
 export async function reduceAgain(deps: AppDeps, runId: string, overrides: ReductionOverrides, rawFileId: string | undefined, caller: User): Promise<Reduction> {
   const run = await loadRunForReduction(runId);
@@ -88,8 +91,10 @@ export async function reduceAgain(deps: AppDeps, runId: string, overrides: Reduc
   if (!rawFile) throw new HttpError(409, 'No raw file', 'Upload the run file before reducing it.');
   const calibration = await requireUsableCalibration(deps.knex, run.test);
   const config = buildReductionConfig(run.test, calibration.calibration, overrides);
+  const first = await Reduction.query().where('rawFileId', rawFile.id).orderBy('version').first();
+  const importProfile = first?.config['importProfile'] as UsedImportProfile | undefined;
   const queued = await deps.knex.transaction(async (trx) => {
-    const q = await queueReduction(trx, { runId: run.id, rawFileId: rawFile.id, inputSha256: rawFile.sha256, config, calibration, createdBy: caller.id });
+    const q = await queueReduction(trx, { runId: run.id, rawFileId: rawFile.id, inputSha256: rawFile.sha256, config, calibration, createdBy: caller.id, importProfile });
     await recordAudit(trx, { actorId: caller.id, action: 'run.reduced_again', entity: 'run', entityId: run.id, after: { reductionId: q.reduction.id, version: q.reduction.version, overrides } });
     return q;
   });

@@ -3,6 +3,7 @@ import {
   Balance,
   BalanceCalibration,
   createRawStore,
+  ImportProfile,
   Organisation,
   RawFile,
   Reduction,
@@ -144,4 +145,16 @@ export async function sampleComparedRunId(f: SampleFixtures): Promise<string> {
   await doneReduction(runId, 1, 3000);
   await doneReduction(runId, 2, 2950);
   return runId;
+}
+
+/** A saved import profile of the lab, for the profile routes of the matrix. */
+export async function sampleImportProfileId(f: SampleFixtures): Promise<string> {
+  const profile = await ImportProfile.query().insert({
+    name: `Matrix profile ${f.unique()}`,
+    description: 'semicolon export with decimal comma',
+    profile: { name: 'matrix', delimiter: ';', decimalComma: true, skipLines: 0, unitsRow: false, columns: [], unmappedColumns: 'keep' },
+    createdBy: await staffUserId(f),
+    archived: false,
+  });
+  return profile.id;
 }

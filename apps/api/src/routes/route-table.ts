@@ -6,6 +6,7 @@ import { bookingRoutes } from './bookings';
 import { authRoutes } from './auth';
 import { devMailboxRoutes } from './dev-mailbox';
 import { healthRoutes } from './health';
+import { importProfileRoutes } from './import-profiles';
 import { invitationRoutes } from './invitations';
 import { maintenanceBlockRoutes } from './maintenance-blocks';
 import { meRoutes } from './me';
@@ -40,6 +41,7 @@ export const resources: Resource[] = [
   { mount: '/api/articles', routes: articleRoutes },
   { mount: '/api/balances', routes: balanceRoutes },
   { mount: '/api/tests', routes: testRoutes },
+  { mount: '/api/import-profiles', routes: importProfileRoutes },
   { mount: '/api/runs', routes: runRoutes },
   { mount: '/api/reductions', routes: reductionRoutes },
   { mount: '/api/shapes', routes: shapeRoutes },

@@ -1,5 +1,5 @@
-import { compareQuerySchema, reductionOverridesSchema, uploadFieldsSchema } from '@tunnelwright/contracts';
-import { DESIGN_CAUTION, parseImportProfile, type ImportProfile } from '@tunnelwright/aero';
+import { compareQuerySchema, previewFieldsSchema, reductionOverridesSchema, uploadFieldsSchema } from '@tunnelwright/contracts';
+import { DESIGN_CAUTION, type ImportProfile } from '@tunnelwright/aero';
 import { RawFile, Reduction, ReductionPoint, Run, scopeToCaller, TestRecord } from '@tunnelwright/db';
 import { pipeline } from 'node:stream/promises';
 import { z } from 'zod';
@@ -9,6 +9,7 @@ import { toRawFile, toReduction, toRun } from '../ingest/ingest-presenters';
 import { ingestServices } from '../ingest/ingest-services';
 import { previewUpload } from '../ingest/preview-upload';
 import { receiveUpload } from '../ingest/receive-upload';
+import { parseProfileField, usableImportProfile } from '../ingest/saved-import-profile';
 import { DuplicateUploadError, reduceAgain, storeUpload } from '../ingest/store-upload';
 import { sampleComparedRunId, sampleRunId } from './ingest-samples';
 import { route, type RouteDef } from './route';
@@ -28,20 +29,17 @@ export const runRoutes: RouteDef[] = [
     method: 'post',
     path: '/preview',
     access: staff,
-    summary: 'Check a run file without keeping it (optionally through an import profile, multipart `profile` JSON): header, first rows, or every issue with line and column',
+    summary: 'Check a run file without keeping it (optionally through an import profile: multipart `profile` JSON or `profileId` of a saved one): header, first rows, or every issue with line and column',
     sample: { expect: 400 },
     handler: async ({ req, res, deps }) => {
       const services = ingestServices(deps);
       const upload = await receiveUpload(req, res, { dir: services.uploadDir, limitBytes: services.uploadLimitBytes });
       try {
+        const fields = previewFieldsSchema.parse(upload.fields);
+        if (fields.profile && fields.profileId) throw HttpError.field('profileId', 'Give either a profile or a saved profile, not both');
         let profile: ImportProfile | undefined;
-        if (upload.fields.profile) {
-          try {
-            profile = parseImportProfile(JSON.parse(upload.fields.profile));
-          } catch (error) {
-            throw HttpError.field('profile', error instanceof SyntaxError ? 'The import profile must be JSON' : (error as Error).message);
-          }
-        }
+        if (fields.profile) profile = parseProfileField(fields.profile);
+        if (fields.profileId) profile = (await usableImportProfile(fields.profileId)).profile;
         res.json(await previewUpload(upload.path, upload.originalName, profile));
       } finally {
         await upload.discard();
@@ -65,7 +63,7 @@ export const runRoutes: RouteDef[] = [
     method: 'post',
     path: '/:runId/files',
     access: staff,
-    summary: 'Upload the raw balance file of a run (multipart `file`, optional `overrides` JSON) and queue its reduction',
+    summary: 'Upload the raw balance file of a run (multipart `file`, optional `overrides` JSON and `profileId` of a saved import profile) and queue its reduction',
     sample: { params: async (f) => ({ runId: await sampleRunId(f) }), expect: 400 },
     handler: async ({ req, res, deps, params, caller }) => {
       const services = ingestServices(deps);
@@ -74,7 +72,8 @@ export const runRoutes: RouteDef[] = [
       const upload = await receiveUpload(req, res, { dir: services.uploadDir, limitBytes: services.uploadLimitBytes });
       try {
         const fields = uploadFieldsSchema.parse(upload.fields);
-        const stored = await storeUpload(deps, runId, upload, fields.overrides, caller);
+        const profile = fields.profileId ? await usableImportProfile(fields.profileId) : undefined;
+        const stored = await storeUpload(deps, runId, upload, fields.overrides, caller, profile);
         const href = `/api/runs/${runId}/raw?fileId=${stored.rawFile.id}`;
         res
           .status(202)

@@ -1,6 +1,7 @@
-import { parseReductionConfig, reduceRun, ReductionConfigError, ReductionError, RunFileError, type PointResult, type ReductionResult } from '@tunnelwright/aero';
+import { applyImportProfile, parseImportProfile, parseReductionConfig, reduceRun, ReductionConfigError, ReductionError, RunFileError, type PointResult, type ReductionResult } from '@tunnelwright/aero';
 import { RawFile, RawObjectMissingError, Reduction, type RawStore } from '@tunnelwright/db';
 import type { Knex } from 'knex';
+import { createHash, type Hash } from 'node:crypto';
 
 /** How often progress is written to the reduction row and the job, ms. */
 const progressEveryMs = 250;
@@ -55,6 +56,14 @@ function pointRow(reductionId: string, index: number, p: PointResult) {
     setpoints: JSON.stringify({ yaw: p.yaw, pitch: p.pitch }),
     result: JSON.stringify(p),
   };
+}
+
+/** Passes the raw bytes on unchanged while hashing them, so the hash is of the stored bytes, not of a rewrite. */
+async function* hashingRaw(input: AsyncIterable<Buffer | string>, hash: Hash): AsyncGenerator<Buffer | string> {
+  for await (const chunk of input) {
+    hash.update(chunk);
+    yield chunk;
+  }
 }
 
 /** Writes every point and marks the reduction done, in one transaction; a retry after a crash inserts nothing twice. */
@@ -115,16 +124,22 @@ export async function runReduction(knex: Knex, store: RawStore, reductionId: str
     pending = pending.then(() => Promise.all([Reduction.query(knex).patch({ progress: fraction }).where('id', reduction.id).where('state', 'running'), report(fraction)])).catch(() => undefined);
   };
   try {
-    const config = parseReductionConfig(reduction.config, `reduction ${reduction.version} configuration`);
-    const input = await store.get(rawFile.storageKey);
+    // A saved import profile recorded at upload is not part of the engine's configuration: it says how
+    // the raw bytes are read, and the engine then sees the canonical text it writes.
+    const { importProfile, ...engineConfig } = reduction.config as { importProfile?: { profile: unknown } };
+    const config = parseReductionConfig(engineConfig, `reduction ${reduction.version} configuration`);
+    const raw = await store.get(rawFile.storageKey);
+    const rawHash = createHash('sha256');
+    const input = importProfile ? applyImportProfile(hashingRaw(raw as AsyncIterable<Buffer>, rawHash), parseImportProfile(importProfile.profile), rawFile.originalName) : raw;
     const result = await reduceRun(input, config, { fileName: rawFile.originalName, onProgress });
     await pending;
-    if (result.inputSha256 !== rawFile.sha256) {
-      const failure = { code: 'RAW_FILE_CHANGED', message: `the stored bytes hash to ${result.inputSha256}, not ${rawFile.sha256} as recorded at upload`, line: null, column: null };
+    const rawSha256 = importProfile ? rawHash.digest('hex') : result.inputSha256;
+    if (rawSha256 !== rawFile.sha256) {
+      const failure = { code: 'RAW_FILE_CHANGED', message: `the stored bytes hash to ${rawSha256}, not ${rawFile.sha256} as recorded at upload`, line: null, column: null };
       await recordFailure(knex, reduction.id, failure);
       return { kind: 'failed', failure };
     }
-    const points = await saveResult(knex, reduction, result);
+    const points = await saveResult(knex, reduction, { ...result, inputSha256: rawSha256 });
     await report(1);
     return { kind: 'done', points };
   } catch (error) {
