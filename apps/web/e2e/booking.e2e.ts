@@ -117,6 +117,53 @@ describe('booking tunnel time', () => {
     await mail.getByText(/booking\.ics \(text\/calendar/).waitFor();
   });
 
+  it('a customer attaches a saved plan, whose tunnel hours set the end, and a PNG drawing; the lab manager sees and downloads the drawing', async () => {
+    const customer = userOf('customer');
+    const manager = userOf('lab_manager');
+    const article = `Inspection trolley ${Date.now().toString(36)}`;
+    const day = DateTime.now().plus({ days: 97 }).toFormat('yyyy-LL-dd');
+    // A 1×1 PNG: the API checks that the content matches the extension.
+    const drawing = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64');
+
+    const customerPage = await browser.freshPage();
+    await signIn(customerPage, api.baseUrl, customer.email);
+    await openSection(customerPage, 'My bookings', 'My bookings');
+    await customerPage.getByRole('link', { name: 'Request tunnel time' }).first().click();
+    await customerPage.getByRole('heading', { name: 'Request tunnel time' }).waitFor();
+    await customerPage.getByRole('combobox', { name: 'Tunnel' }).click();
+    await customerPage.getByRole('option', { name: 'Tunnel 1 — closed section' }).click();
+    await customerPage.getByRole('combobox', { name: 'Saved test plan' }).click();
+    await customerPage.getByRole('option', { name: /^Inspection trolley with rider/ }).click();
+    await customerPage.getByTestId('plan-duration').getByText(/h of tunnel time/).waitFor();
+    await customerPage.getByLabel('Start', { exact: true }).fill(`${day}T09:00`);
+    // The end follows from the start by the plan's estimated tunnel hours.
+    await expect.poll(async () => (await customerPage.getByLabel('End', { exact: true }).inputValue()) > `${day}T09:00`).toBe(true);
+    await customerPage.getByLabel('Article name').fill(article);
+    await customerPage.getByRole('combobox', { name: 'Coefficients based on' }).focus();
+    await customerPage.keyboard.press('Enter');
+    await customerPage.getByRole('option', { name: 'Frontal area' }).click();
+    await customerPage.getByLabel('Choose drawings or photos').setInputFiles([
+      { name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a drawing') },
+      { name: 'side-view.png', mimeType: 'image/png', buffer: drawing },
+    ]);
+    await customerPage.getByText('notes.txt: only PDF, PNG, JPEG, DWG and DXF files are accepted.').waitFor();
+    await customerPage.getByRole('list', { name: 'Chosen files' }).getByText('side-view.png').waitFor();
+    await customerPage.screenshot({ path: `${shots}/booking-request-attachments.png` });
+    await customerPage.getByRole('button', { name: 'Send request' }).click();
+    await customerPage.getByRole('heading', { name: 'My bookings', level: 1 }).waitFor();
+    const customerCard = customerPage.locator('tw-booking-summary').filter({ hasText: article });
+    await customerCard.getByRole('button', { name: 'Download side-view.png' }).waitFor();
+
+    const managerPage = await browser.freshPage();
+    await signIn(managerPage, api.baseUrl, manager.email);
+    await openSection(managerPage, 'Bookings', 'Bookings');
+    const managerCard = managerPage.locator('tw-booking-summary').filter({ hasText: article });
+    await managerCard.getByText(/side-view\.png \(\d+ B\)/).waitFor();
+    const download = managerPage.waitForEvent('download');
+    await managerCard.getByRole('button', { name: 'Download side-view.png' }).click();
+    expect((await download).suggestedFilename()).toBe('side-view.png');
+  });
+
   it('a lab manager blocks a tunnel for maintenance on the calendar after the form explains what is missing, then removes it after confirming', async () => {
     const reason = `Fan bearing inspection ${Date.now().toString(36)}`;
     const day = DateTime.now().plus({ days: 5 }).toFormat('yyyy-LL-dd');

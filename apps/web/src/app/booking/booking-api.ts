@@ -1,7 +1,10 @@
-import { HttpClient } from '@angular/common/http';
+import { HttpClient, HttpEventType, type HttpEvent, type HttpResponse } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
-import type { Booking, BookingRequest, BookingSettings, CancellationPreview, MaintenanceBlock, Occupancy, PeriodInput, QuoteInput } from '@tunnelwright/contracts';
-import { Observable } from 'rxjs';
+import type { Booking, BookingAttachment, BookingRequest, BookingSettings, CancellationPreview, MaintenanceBlock, Occupancy, PeriodInput, QuoteInput } from '@tunnelwright/contracts';
+import { Observable, filter, map } from 'rxjs';
+
+/** How far one attachment upload has come: a share of the bytes sent, then the stored attachments. */
+export type AttachmentUploadEvent = { readonly kind: 'progress'; readonly fraction: number } | { readonly kind: 'done'; readonly attachments: BookingAttachment[] };
 
 /** The lab's booking rules together with its IANA zone. */
 export type LabBookingSettings = BookingSettings & { readonly timeZone: string };
@@ -83,5 +86,25 @@ export class BookingApi {
 
   deleteMaintenanceBlock(id: string): Observable<void> {
     return this.http.delete<void>(`/api/maintenance-blocks/${id}`);
+  }
+
+  /** Sends one file to a booking, reporting the share of bytes sent. */
+  attach(id: string, file: File): Observable<AttachmentUploadEvent> {
+    const body = new FormData();
+    body.append('files', file, file.name);
+    return this.http.post<BookingAttachment[]>(`/api/bookings/${id}/attachments`, body, { reportProgress: true, observe: 'events' }).pipe(
+      filter((event: HttpEvent<BookingAttachment[]>) => event.type === HttpEventType.UploadProgress || event.type === HttpEventType.Response),
+      map((event): AttachmentUploadEvent => {
+        if (event.type === HttpEventType.UploadProgress) {
+          return { kind: 'progress', fraction: event.total ? event.loaded / event.total : 0 };
+        }
+        return { kind: 'done', attachments: (event as HttpResponse<BookingAttachment[]>).body ?? [] };
+      }),
+    );
+  }
+
+  /** One attachment's content, fetched with the signed-in session. */
+  attachment(id: string, attachmentId: string): Observable<Blob> {
+    return this.http.get(`/api/bookings/${id}/attachments/${attachmentId}`, { responseType: 'blob' });
   }
 }

@@ -36,6 +36,8 @@ export function bookingRequestForm() {
   return new FormGroup(
     {
       tunnelId: new FormControl<string | null>(null, Validators.required),
+      /** A saved test plan of the customer's organisation to attach, if any. */
+      planId: new FormControl<string | null>(null),
       serviceId: new FormControl<string | null>(null),
       start: new FormControl('', { nonNullable: true, validators: Validators.required }),
       end: new FormControl('', { nonNullable: true, validators: Validators.required }),
@@ -70,5 +72,6 @@ export function bookingRequestOf(form: BookingRequestForm, labZone: string): Boo
         .map((label) => ({ label: label.slice(0, 120), description: '' })),
     },
     note: raw.note.trim(),
+    ...(raw.planId ? { planId: raw.planId } : {}),
   };
 }

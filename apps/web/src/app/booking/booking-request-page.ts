@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, computed, effect, inject, input, signal, untracked, type OnInit } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -9,22 +9,30 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import type { ReferenceAreaKind } from '@tunnelwright/contracts';
+import type { Booking, ReferenceAreaKind } from '@tunnelwright/contracts';
+import { of } from 'rxjs';
 import { CatalogueApi } from '../core/catalogue-api';
 import { problemFieldErrors, problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { focusFirstInvalid } from '../shared/focus-first-invalid';
+import { PlannerApi } from '../planner/planner-api';
+import { chooseAttachments } from './attachment-limits';
+import { AttachmentPicker } from './attachment-picker';
+import type { AttachmentUpload } from './attachment-upload';
 import { BookingApi } from './booking-api';
 import { articleForm, bookingRequestForm, bookingRequestOf } from './booking-request-form';
-import { userTimeZone } from './lab-time';
+import { localValueAfterHours, userTimeZone } from './lab-time';
 import { referenceAreaKindLabels } from './reference-area-kind-labels';
 import { TunnelOccupancyWeek } from './tunnel-occupancy-week';
 
-/** A customer asks for tunnel time: tunnel, service, period, articles and test plan. */
+/**
+ * A customer asks for tunnel time: tunnel, service, period, articles, test plan, optionally one of their saved plans
+ * (whose tunnel hours set the end from the start), and drawings or photos sent once the request exists.
+ */
 @Component({
   selector: 'tw-booking-request-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, RouterLink, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule, MatIconModule, MatProgressBarModule, ErrorBanner, TunnelOccupancyWeek],
+  imports: [ReactiveFormsModule, RouterLink, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule, MatIconModule, MatProgressBarModule, ErrorBanner, TunnelOccupancyWeek, AttachmentPicker],
   templateUrl: './booking-request-page.html',
   styles: `
     form {
@@ -55,14 +63,22 @@ import { TunnelOccupancyWeek } from './tunnel-occupancy-week';
     .form-error {
       color: var(--mat-sys-error);
     }
+    .plan-hint {
+      color: var(--mat-sys-on-surface-variant);
+      margin: 8px 0;
+    }
   `,
 })
-export class BookingRequestPage {
+export class BookingRequestPage implements OnInit {
   private readonly bookings = inject(BookingApi);
   private readonly catalogue = inject(CatalogueApi);
   private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
+  private readonly planner = inject(PlannerApi);
+
+  /** A saved plan to start from, from the page's `?planId=`. */
+  readonly planId = input<string>();
 
   protected readonly form = bookingRequestForm();
   protected readonly areaKinds = Object.entries(referenceAreaKindLabels) as [ReferenceAreaKind, string][];
@@ -84,6 +100,67 @@ export class BookingRequestPage {
   protected readonly sending = signal(false);
   protected readonly sendError = signal<string | null>(null);
 
+  protected readonly plans = rxResource({ stream: () => this.planner.plans() });
+  protected readonly plansError = computed(() => {
+    const error = this.plans.error();
+    return error ? problemMessage(error.cause ?? error, 'Your saved plans could not be loaded.') : null;
+  });
+  private readonly chosenPlanId = toSignal(this.form.controls.planId.valueChanges, { initialValue: null });
+  protected readonly chosenPlan = rxResource({
+    params: () => this.chosenPlanId() ?? undefined,
+    stream: ({ params }) => (params ? this.planner.plan(params) : of(undefined)),
+  });
+  protected readonly chosenPlanError = computed(() => {
+    const error = this.chosenPlan.error();
+    return error ? problemMessage(error.cause ?? error, 'The chosen plan could not be opened.') : null;
+  });
+  /** Tunnel hours the chosen plan's evaluation estimates. */
+  protected readonly planHours = computed(() => (this.chosenPlan.hasValue() ? (this.chosenPlan.value()?.evaluation.duration.hours ?? null) : null));
+  private readonly start = toSignal(this.form.controls.start.valueChanges, { initialValue: '' });
+
+  protected readonly uploads = signal<AttachmentUpload[]>([]);
+  protected readonly refusals = signal<string[]>([]);
+  /** The request once the lab has it; files are attached to it, and a retry sends only what failed. */
+  protected readonly created = signal<Booking | null>(null);
+  protected readonly uploadError = computed(() => {
+    const failed = this.uploads().filter((upload) => upload.phase === 'failed').length;
+    const busy = this.uploads().some((upload) => upload.phase === 'uploading');
+    if (!this.created() || busy || failed === 0) return null;
+    return `The request was sent, but ${failed === 1 ? 'one file' : `${failed} files`} could not be attached.`;
+  });
+  private nextKey = 0;
+
+  constructor() {
+    // The end follows from the start whenever a chosen plan says how long the test takes.
+    effect(() => {
+      const hours = this.planHours();
+      const start = this.start();
+      if (hours === null || !start) return;
+      const end = localValueAfterHours(start, hours);
+      if (end) untracked(() => this.form.controls.end.setValue(end));
+    });
+  }
+
+  ngOnInit(): void {
+    const planId = this.planId();
+    if (planId) this.form.controls.planId.setValue(planId);
+  }
+
+  protected planLabel(name: string, bookingId: string | null): string {
+    return bookingId ? `${name} (attached to a booking)` : name;
+  }
+
+  protected addFiles(files: File[]): void {
+    const choice = chooseAttachments(files, this.uploads().length);
+    this.refusals.set(choice.refusals);
+    this.uploads.update((uploads) => [...uploads, ...choice.accepted.map((file): AttachmentUpload => ({ key: this.nextKey++, file, phase: 'waiting', progress: 0, message: '' }))]);
+  }
+
+  protected removeFile(key: number): void {
+    this.refusals.set([]);
+    this.uploads.update((uploads) => uploads.filter((upload) => upload.key !== key));
+  }
+
   protected get articles() {
     return this.form.controls.articles;
   }
@@ -104,6 +181,10 @@ export class BookingRequestPage {
 
   protected submit(): void {
     const zone = this.labZone();
+    if (this.created()) {
+      this.sendFiles();
+      return;
+    }
     if (this.form.invalid || !zone) {
       this.form.markAllAsTouched();
       focusFirstInvalid(this.host.nativeElement);
@@ -114,8 +195,8 @@ export class BookingRequestPage {
     this.bookings.request(bookingRequestOf(this.form, zone)).subscribe({
       next: (booking) => {
         this.sending.set(false);
-        this.snackBar.open(`Request sent for ${booking.tunnelName}. The slot is held while the lab answers.`, undefined, { duration: 6000 });
-        void this.router.navigate(['/bookings']);
+        this.created.set(booking);
+        this.sendFiles();
       },
       error: (error: unknown) => {
         this.sending.set(false);
@@ -123,5 +204,39 @@ export class BookingRequestPage {
         this.sendError.set([problemMessage(error, 'The request could not be sent.'), ...fields].join(' '));
       },
     });
+  }
+
+  /** Sends every file not yet stored, each in its own call so each shows its own progress; then opens the list. */
+  protected sendFiles(): void {
+    const booking = this.created();
+    if (!booking) return;
+    const pending = this.uploads().filter((upload) => upload.phase === 'waiting' || upload.phase === 'failed');
+    if (pending.length === 0) {
+      this.finish(booking);
+      return;
+    }
+    for (const upload of pending) {
+      this.patchUpload(upload.key, { phase: 'uploading', progress: 0, message: '' });
+      this.bookings.attach(booking.id, upload.file).subscribe({
+        next: (event) => this.patchUpload(upload.key, event.kind === 'progress' ? { progress: event.fraction } : { phase: 'stored', progress: 1 }),
+        error: (error: unknown) => {
+          this.patchUpload(upload.key, { phase: 'failed', message: problemMessage(error, 'Not attached.') });
+        },
+        complete: () => {
+          if (this.uploads().every((item) => item.phase === 'stored')) this.finish(booking);
+        },
+      });
+    }
+  }
+
+  private patchUpload(key: number, change: Partial<AttachmentUpload>): void {
+    this.uploads.update((uploads) => uploads.map((upload) => (upload.key === key ? { ...upload, ...change } : upload)));
+  }
+
+  private finish(booking: Booking): void {
+    const files = this.uploads().length;
+    const attached = files === 0 ? '' : ` with ${files === 1 ? 'one file' : `${files} files`}`;
+    this.snackBar.open(`Request sent for ${booking.tunnelName}${attached}. The slot is held while the lab answers.`, undefined, { duration: 6000 });
+    void this.router.navigate(['/bookings']);
   }
 }

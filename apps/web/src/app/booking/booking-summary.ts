@@ -3,6 +3,7 @@ import { MatCardModule } from '@angular/material/card';
 import { MatChipsModule } from '@angular/material/chips';
 import type { Booking } from '@tunnelwright/contracts';
 import { formatMoney } from '../shared/money';
+import { BookingAttachmentList } from './booking-attachment-list';
 import { bookingStateLabels } from './booking-state-labels';
 import { formatPeriod } from './lab-time';
 import { quoteLineKindLabels } from './quote-editor';
@@ -12,7 +13,7 @@ import { referenceAreaKindLabels } from './reference-area-kind-labels';
 @Component({
   selector: 'tw-booking-summary',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatCardModule, MatChipsModule],
+  imports: [MatCardModule, MatChipsModule, BookingAttachmentList],
   templateUrl: './booking-summary.html',
   styles: `
     mat-card {
@@ -64,9 +65,5 @@ export class BookingSummary {
 
   protected money(minor: number, currency: string | null): string {
     return currency ? formatMoney(minor, currency) : String(minor);
-  }
-
-  protected size(bytes: number): string {
-    return bytes < 1024 * 1024 ? `${Math.ceil(bytes / 1024)} KB` : `${(bytes / 1024 / 1024).toFixed(1)} MB`;
   }
 }

@@ -1,4 +1,4 @@
-import { formatPeriod, labInstant, localValueOf } from './lab-time';
+import { formatPeriod, labInstant, localValueAfterHours, localValueOf } from './lab-time';
 
 describe('lab time', () => {
   const period = { start: '2026-10-05T08:00:00Z', end: '2026-10-05T16:00:00Z' };
@@ -21,5 +21,16 @@ describe('lab time', () => {
 
   it('refuses an empty value', () => {
     expect(labInstant('', 'Europe/London')).toBeNull();
+  });
+
+  it('adds hours on the wall clock, rounded up to the minute, across midnight', () => {
+    expect(localValueAfterHours('2026-10-05T09:00', 3.5)).toBe('2026-10-05T12:30');
+    expect(localValueAfterHours('2026-10-05T22:00', 2.01)).toBe('2026-10-06T00:01');
+  });
+
+  it('adds nothing to an invalid start or a duration that is not positive', () => {
+    expect(localValueAfterHours('', 2)).toBeNull();
+    expect(localValueAfterHours('2026-10-05T09:00', 0)).toBeNull();
+    expect(localValueAfterHours('2026-10-05T09:00', Number.NaN)).toBeNull();
   });
 });

@@ -36,3 +36,13 @@ export function labInstant(localValue: string, labZone: string): string | null {
 export function localValueOf(instant: string, labZone: string): string {
   return DateTime.fromISO(instant, { zone: labZone }).toFormat("yyyy-LL-dd'T'HH:mm");
 }
+
+/**
+ * The `datetime-local` value `hours` after another, on the wall clock, rounded up to the next whole minute; null when
+ * the start is not a valid value.
+ */
+export function localValueAfterHours(localValue: string, hours: number): string | null {
+  // Read as UTC so the sum is plain wall-clock arithmetic, untouched by the browser's own daylight-saving changes.
+  const start = DateTime.fromISO(localValue, { zone: 'UTC' });
+  return start.isValid && Number.isFinite(hours) && hours > 0 ? start.plus({ minutes: Math.ceil(hours * 60) }).toFormat("yyyy-LL-dd'T'HH:mm") : null;
+}

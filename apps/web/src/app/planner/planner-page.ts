@@ -1,6 +1,6 @@
 import { DatePipe } from '@angular/common';
 import { HttpClient } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, Injector, computed, inject, signal } from '@angular/core';
 import { rxResource, takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -10,6 +10,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatListModule } from '@angular/material/list';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
+import { Router } from '@angular/router';
 import type { FieldError, Organisation, PlanDetail, PlanEvaluation, PlanInputDraft, PlanVersion } from '@tunnelwright/contracts';
 import { Subject, catchError, debounceTime, distinctUntilChanged, map, merge, of, startWith, switchMap } from 'rxjs';
 import { AuthService } from '../core/auth-service';
@@ -75,6 +76,15 @@ export class PlannerPage {
   /** Lab managers save new plans for a customer organisation they pick; customers save for their own. */
   protected readonly isLabManager = computed(() => this.role() === 'lab_manager');
   protected readonly isAnalyst = computed(() => this.role() === 'analyst');
+  protected readonly isCustomer = computed(() => this.role() === 'customer');
+  private readonly injector = inject(Injector);
+
+  /** Opens the booking request with this plan chosen; the router is looked up only when the link is used. */
+  protected useForBooking(event: MouseEvent, planId: string): void {
+    if (event.ctrlKey || event.metaKey || event.shiftKey) return;
+    event.preventDefault();
+    void this.injector.get(Router).navigate(['/bookings/new'], { queryParams: { planId } });
+  }
   protected readonly organisations = rxResource({
     params: () => (this.isLabManager() ? true : undefined),
     stream: () => this.http.get<Organisation[]>('/api/organisations').pipe(map((list) => list.filter((org) => org.kind === 'customer'))),
