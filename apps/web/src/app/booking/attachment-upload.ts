@@ -12,10 +12,3 @@ export interface AttachmentUpload {
   /** Why the upload failed. */
   readonly message: string;
 }
-
-/** Size in plain units. */
-export function attachmentSizeText(bytes: number): string {
-  if (bytes < 1024) return `${bytes} B`;
-  if (bytes < 1024 * 1024) return `${(bytes / 1024).toFixed(1)} kB`;
-  return `${(bytes / 1024 / 1024).toFixed(1)} MB`;
-}

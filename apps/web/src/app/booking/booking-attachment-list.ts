@@ -3,7 +3,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import type { BookingAttachment } from '@tunnelwright/contracts';
 import { problemMessage } from '../core/problem-message';
-import { attachmentSizeText } from './attachment-upload';
+import { fileSizeText } from '../shared/file-size-text';
 import { BookingApi } from './booking-api';
 
 /** A booking's drawings, photos and documents, each downloaded through the signed-in session. */
@@ -48,7 +48,7 @@ export class BookingAttachmentList {
   protected readonly downloadError = signal<string | null>(null);
 
   protected size(bytes: number): string {
-    return attachmentSizeText(bytes);
+    return fileSizeText(bytes);
   }
 
   /** Fetches the file with the session's credentials and hands it to the browser as a download. */

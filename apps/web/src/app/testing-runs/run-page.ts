@@ -21,7 +21,7 @@ import { PointsTable } from './points-table';
 import { ReReduceForm } from './re-reduce-form';
 import { ReductionProgress } from './reduction-progress';
 import { reductionStateLabels, runKindLabels, warningText } from './run-labels';
-import { fileSizeText } from './upload-item';
+import { fileSizeText } from '../shared/file-size-text';
 import { VersionComparison } from './version-comparison';
 
 /** One run: its raw files with SHA-256 and download, its reduction versions, the chosen version's points and chart. */

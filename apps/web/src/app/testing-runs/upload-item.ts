@@ -25,10 +25,3 @@ export interface UploadItem {
 export function isReadyToUpload(item: UploadItem): boolean {
   return item.phase === 'checked' && item.preview?.valid === true;
 }
-
-/** Size in plain units. */
-export function fileSizeText(bytes: number): string {
-  if (bytes < 1024) return `${bytes} B`;
-  if (bytes < 1024 * 1024) return `${(bytes / 1024).toFixed(1)} kB`;
-  return `${(bytes / 1024 / 1024).toFixed(1)} MB`;
-}

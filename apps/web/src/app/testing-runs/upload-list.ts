@@ -5,7 +5,8 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import { FilePreview } from './file-preview';
 import { ReductionProgress } from './reduction-progress';
-import { fileSizeText, type UploadItem, type UploadPhase } from './upload-item';
+import { fileSizeText } from '../shared/file-size-text';
+import type { UploadItem, UploadPhase } from './upload-item';
 
 const phaseLabels: Readonly<Record<UploadPhase, string>> = {
   checking: 'Checking…',

@@ -12,7 +12,7 @@ import { from, mergeMap } from 'rxjs';
 import { problemMessage, problemStatus } from '../core/problem-message';
 import { SafetyNotice } from '../core/safety-notice';
 import { ErrorBanner } from '../shared/error-banner';
-import { FileDropZone } from './file-drop-zone';
+import { FileDropZone } from '../shared/file-drop-zone';
 import { IngestApi } from './ingest-api';
 import { NewRunForm } from './new-run-form';
 import { runKindLabels } from './run-labels';

@@ -3,8 +3,8 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 
 /**
- * Where run files are dropped, or picked with the file dialog. The zone itself is focusable: Enter or Space opens
- * the dialog, so the keyboard reaches everything the mouse does.
+ * Where files are dropped, or picked with the file dialog. The zone itself is focusable: Enter or Space opens
+ * the dialog, so the keyboard reaches everything the mouse does. Used for run files and for booking attachments.
  */
 @Component({
   selector: 'tw-file-drop-zone',
@@ -18,7 +18,7 @@ import { MatIconModule } from '@angular/material/icon';
       [class.over]="over()"
       [class.disabled]="disabled()"
       [attr.aria-disabled]="disabled()"
-      aria-label="Drop run files here, or press Enter to choose files"
+      [attr.aria-label]="'Drop ' + what() + ' here, or press Enter to choose files'"
       (keydown.enter)="open($event)"
       (keydown.space)="open($event)"
       (click)="open($event)"
@@ -26,10 +26,18 @@ import { MatIconModule } from '@angular/material/icon';
       (dragleave)="over.set(false)"
       (drop)="drop($event)"
     >
-      <mat-icon aria-hidden="true">upload_file</mat-icon>
-      <span>Drop one or several run files here, or <u>choose files</u></span>
+      <mat-icon class="material-icons" aria-hidden="true">{{ icon() }}</mat-icon>
+      <span>Drop {{ what() }} here, or <u>choose files</u></span>
     </div>
-    <input #picker class="picker" type="file" multiple accept=".csv,.txt,.dat,text/csv,text/plain" aria-label="Choose run files" (change)="picked(picker)" />
+    <input
+      #picker
+      class="picker"
+      type="file"
+      multiple
+      [accept]="accept()"
+      [attr.aria-label]="'Choose ' + what()"
+      (change)="picked(picker)"
+    />
   `,
   styles: `
     .zone {
@@ -37,7 +45,7 @@ import { MatIconModule } from '@angular/material/icon';
       align-items: center;
       justify-content: center;
       gap: 12px;
-      min-height: 96px;
+      min-height: 72px;
       border: 2px dashed var(--mat-sys-outline);
       border-radius: var(--mat-sys-corner-medium);
       cursor: pointer;
@@ -65,7 +73,13 @@ import { MatIconModule } from '@angular/material/icon';
   `,
 })
 export class FileDropZone {
-  /** Whether files may not be added now (no run chosen yet). */
+  /** What the zone takes, in words, e.g. `run files`; used in its text and labels. */
+  readonly what = input.required<string>();
+  /** The file input's `accept` attribute. */
+  readonly accept = input('');
+  /** Material icon ligature shown in the zone. */
+  readonly icon = input('upload_file');
+  /** Whether files may not be added now. */
   readonly disabled = input(false);
   /** Emitted with the files dropped or picked. */
   readonly files = output<File[]>();
