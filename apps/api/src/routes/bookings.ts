@@ -18,13 +18,13 @@ import {
 import { Booking, expireLapsedHolds, isStaff, Organisation, Plan, Quote, recordAudit, scopeToCaller, Service, TestRecord, Tunnel, User } from '@tunnelwright/db';
 import type { Knex } from 'knex';
 import { bookingGraph, liveQuote, loadBooking, toBooking } from '../bookings/booking-presenter';
-import { auditView, mailQuietly, transitionBooking, withClashCheck } from '../bookings/booking-transitions';
+import { auditView, mailQuietly, transitionBooking, withClashCheck, type TransitionSpec } from '../bookings/booking-transitions';
 import { cancellationPreview } from '../bookings/cancellation-fee';
 import { loadLabBookingContext } from '../bookings/lab-booking-settings';
 import { instantsOf, rangeLiteral } from '../bookings/periods';
 import { HttpError } from '../errors/http-error';
 import { sampleBookingId, sampleBookingRequest, samplePeriod, sampleTechnicianBody } from './booking-samples';
-import { route, type RouteDef } from './route';
+import { route, type RouteContext, type RouteDef } from './route';
 
 const hour = 3_600_000;
 
@@ -47,6 +47,19 @@ async function insertQuote(trx: Knex.Transaction, bookingId: string, currency: s
 const sampleOf = (state: Parameters<typeof sampleBookingId>[1]) => async (f: Parameters<typeof sampleBookingId>[0]) => ({ id: await sampleBookingId(f, state) });
 
 /** /api/bookings: requests for tunnel time and their life cycle. Customers see their own organisation's only. */
+
+/**
+ * Runs one transition of the booking named in the path (`:id`) and answers with the booking as the caller
+ * sees it, in the lab's time zone. Every state-changing route below is this plus its own transition spec.
+ */
+async function answerTransition(
+  { caller, params, deps, req, res }: Pick<RouteContext<unknown, unknown>, 'caller' | 'params' | 'deps' | 'req' | 'res'>,
+  spec: TransitionSpec,
+): Promise<void> {
+  const { booking, context } = await transitionBooking(deps, caller, params.id ?? '', spec, req.log);
+  res.json(toBooking(booking, context.timeZone));
+}
+
 export const bookingRoutes: RouteDef[] = [
   route({
     method: 'get',
@@ -168,25 +181,18 @@ export const bookingRoutes: RouteDef[] = [
     body: quoteInputSchema,
     sample: { params: sampleOf('requested'), body: () => ({ lines: [{ kind: 'tunnel_hours', quantity: 8, unitPriceMinor: 15000 }] }), expect: 200 },
     handler: async ({ caller, params, body, deps, req, res }) => {
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'quoted',
-          attempt: 'send a quote',
-          from: ['requested'],
-          event: 'quoted',
-          change: async (b, trx, ctx) => {
-            const service = b.serviceId ? await Service.query(trx).findById(b.serviceId) : undefined;
-            const currency = body.currency ?? service?.currency ?? (typeof ctx.lab.settings.defaultCurrency === 'string' ? ctx.lab.settings.defaultCurrency : 'EUR');
-            await insertQuote(trx, b.id, currency, body.lines, body.note, caller.id);
-            return { state: 'quoted', holdExpiresAt: holdUntil(ctx.rules) };
-          },
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'quoted',
+        attempt: 'send a quote',
+        from: ['requested'],
+        event: 'quoted',
+        change: async (b, trx, ctx) => {
+          const service = b.serviceId ? await Service.query(trx).findById(b.serviceId) : undefined;
+          const currency = body.currency ?? service?.currency ?? (typeof ctx.lab.settings.defaultCurrency === 'string' ? ctx.lab.settings.defaultCurrency : 'EUR');
+          await insertQuote(trx, b.id, currency, body.lines, body.note, caller.id);
+          return { state: 'quoted', holdExpiresAt: holdUntil(ctx.rules) };
         },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      });
     },
   }),
   route({
@@ -197,23 +203,16 @@ export const bookingRoutes: RouteDef[] = [
     body: declineBookingSchema,
     sample: { params: sampleOf('requested'), body: () => ({ reason: 'The tunnel is closed for the fan overhaul that week.' }), expect: 200 },
     handler: async ({ caller, params, body, deps, req, res }) => {
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'declined',
-          attempt: 'decline the booking',
-          from: ['requested', 'quoted', 'counter_proposed'],
-          event: 'declined',
-          change: async (b, trx) => {
-            await Quote.query(trx).patch({ state: 'withdrawn' }).where({ bookingId: b.id, state: 'offered' });
-            return { state: 'declined', declineReason: body.reason, holdExpiresAt: null };
-          },
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'declined',
+        attempt: 'decline the booking',
+        from: ['requested', 'quoted', 'counter_proposed'],
+        event: 'declined',
+        change: async (b, trx) => {
+          await Quote.query(trx).patch({ state: 'withdrawn' }).where({ bookingId: b.id, state: 'offered' });
+          return { state: 'declined', declineReason: body.reason, holdExpiresAt: null };
         },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      });
     },
   }),
   route({
@@ -226,21 +225,14 @@ export const bookingRoutes: RouteDef[] = [
     handler: async ({ caller, params, body, deps, req, res }) => {
       const period = instantsOf(body);
       assertFuture(period.start);
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'counter_proposed',
-          attempt: 'propose another period',
-          from: ['requested'],
-          event: 'counter_proposed',
-          requestedPeriod: period,
-          change: async (_b, _trx, ctx) => ({ state: 'counter_proposed', counterPeriod: rangeLiteral(period), counterNote: body.note, holdExpiresAt: holdUntil(ctx.rules) }),
-        },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'counter_proposed',
+        attempt: 'propose another period',
+        from: ['requested'],
+        event: 'counter_proposed',
+        requestedPeriod: period,
+        change: async (_b, _trx, ctx) => ({ state: 'counter_proposed', counterPeriod: rangeLiteral(period), counterNote: body.note, holdExpiresAt: holdUntil(ctx.rules) }),
+      });
     },
   }),
   route({
@@ -251,20 +243,13 @@ export const bookingRoutes: RouteDef[] = [
     body: emptyBodySchema,
     sample: { params: sampleOf('counter_proposed'), body: () => ({}), expect: 200, crossOrganisation: true },
     handler: async ({ caller, params, deps, req, res }) => {
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'counter_accepted',
-          attempt: 'accept a proposed period',
-          from: ['counter_proposed'],
-          event: 'counter_accepted',
-          change: async (b, _trx, ctx) => ({ state: 'requested', period: b.counterPeriod ?? b.period, counterPeriod: null, holdExpiresAt: holdUntil(ctx.rules) }),
-        },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'counter_accepted',
+        attempt: 'accept a proposed period',
+        from: ['counter_proposed'],
+        event: 'counter_accepted',
+        change: async (b, _trx, ctx) => ({ state: 'requested', period: b.counterPeriod ?? b.period, counterPeriod: null, holdExpiresAt: holdUntil(ctx.rules) }),
+      });
     },
   }),
   route({
@@ -275,25 +260,18 @@ export const bookingRoutes: RouteDef[] = [
     body: emptyBodySchema,
     sample: { params: sampleOf('quoted'), body: () => ({}), expect: 200, crossOrganisation: true },
     handler: async ({ caller, params, deps, req, res }) => {
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'confirmed',
-          attempt: 'accept the quote',
-          from: ['quoted'],
-          event: 'confirmed',
-          change: async (b, trx) => {
-            const quote = liveQuote(b);
-            if (!quote) throw new HttpError(409, 'No quote', 'This booking has no quote to accept.');
-            await Quote.query(trx).patch({ state: 'accepted' }).where('id', quote.id);
-            return { state: 'confirmed', holdExpiresAt: null };
-          },
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'confirmed',
+        attempt: 'accept the quote',
+        from: ['quoted'],
+        event: 'confirmed',
+        change: async (b, trx) => {
+          const quote = liveQuote(b);
+          if (!quote) throw new HttpError(409, 'No quote', 'This booking has no quote to accept.');
+          await Quote.query(trx).patch({ state: 'accepted' }).where('id', quote.id);
+          return { state: 'confirmed', holdExpiresAt: null };
         },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      });
     },
   }),
   route({
@@ -304,23 +282,16 @@ export const bookingRoutes: RouteDef[] = [
     body: emptyBodySchema,
     sample: { params: sampleOf('quoted'), body: () => ({}), expect: 200, crossOrganisation: true },
     handler: async ({ caller, params, deps, req, res }) => {
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'rejected',
-          attempt: 'reject the quote',
-          from: ['quoted'],
-          event: 'rejected',
-          change: async (b, trx) => {
-            await Quote.query(trx).patch({ state: 'rejected' }).where({ bookingId: b.id, state: 'offered' });
-            return { state: 'rejected', holdExpiresAt: null };
-          },
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'rejected',
+        attempt: 'reject the quote',
+        from: ['quoted'],
+        event: 'rejected',
+        change: async (b, trx) => {
+          await Quote.query(trx).patch({ state: 'rejected' }).where({ bookingId: b.id, state: 'offered' });
+          return { state: 'rejected', holdExpiresAt: null };
         },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      });
     },
   }),
   route({
@@ -333,21 +304,14 @@ export const bookingRoutes: RouteDef[] = [
     handler: async ({ caller, params, body, deps, req, res }) => {
       const period = instantsOf(body);
       assertFuture(period.start);
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'rescheduled',
-          attempt: 'move the booking',
-          from: ['confirmed'],
-          event: 'rescheduled',
-          requestedPeriod: period,
-          change: async (b) => ({ period: rangeLiteral(period), icsSequence: b.icsSequence + 1 }),
-        },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'rescheduled',
+        attempt: 'move the booking',
+        from: ['confirmed'],
+        event: 'rescheduled',
+        requestedPeriod: period,
+        change: async (b) => ({ period: rangeLiteral(period), icsSequence: b.icsSequence + 1 }),
+      });
     },
   }),
   route({
@@ -362,20 +326,13 @@ export const bookingRoutes: RouteDef[] = [
         const technician = await User.query(deps.knex).findById(body.technicianId);
         if (!technician || technician.role !== 'technician' || !technician.active) throw HttpError.field('technicianId', 'Choose an active technician of the lab');
       }
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'technician_assigned',
-          attempt: 'assign a technician',
-          from: ['requested', 'quoted', 'counter_proposed', 'confirmed', 'in_test'],
-          event: 'technician_assigned',
-          change: async () => ({ technicianId: body.technicianId }),
-        },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'technician_assigned',
+        attempt: 'assign a technician',
+        from: ['requested', 'quoted', 'counter_proposed', 'confirmed', 'in_test'],
+        event: 'technician_assigned',
+        change: async () => ({ technicianId: body.technicianId }),
+      });
     },
   }),
   route({
@@ -386,26 +343,19 @@ export const bookingRoutes: RouteDef[] = [
     body: startBookingSchema,
     sample: { params: sampleOf('confirmed'), body: () => ({}), expect: 200 },
     handler: async ({ caller, params, body, deps, req, res }) => {
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'in_test',
-          attempt: 'start the test',
-          from: ['confirmed'],
-          event: 'in_test',
-          change: async (b, trx) => {
-            if (!body.testId) return { state: 'in_test' };
-            const test = await TestRecord.query(trx).findById(body.testId);
-            if (!test || test.organisationId !== b.organisationId || test.tunnelId !== b.tunnelId) throw HttpError.field('testId', "Choose a test of this customer's in this tunnel");
-            await TestRecord.query(trx).patch({ bookingId: b.id }).where('id', test.id);
-            return { state: 'in_test', testId: test.id };
-          },
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'in_test',
+        attempt: 'start the test',
+        from: ['confirmed'],
+        event: 'in_test',
+        change: async (b, trx) => {
+          if (!body.testId) return { state: 'in_test' };
+          const test = await TestRecord.query(trx).findById(body.testId);
+          if (!test || test.organisationId !== b.organisationId || test.tunnelId !== b.tunnelId) throw HttpError.field('testId', "Choose a test of this customer's in this tunnel");
+          await TestRecord.query(trx).patch({ bookingId: b.id }).where('id', test.id);
+          return { state: 'in_test', testId: test.id };
         },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      });
     },
   }),
   route({
@@ -416,14 +366,7 @@ export const bookingRoutes: RouteDef[] = [
     body: emptyBodySchema,
     sample: { params: sampleOf('in_test'), body: () => ({}), expect: 200 },
     handler: async ({ caller, params, deps, req, res }) => {
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        { action: 'completed', attempt: 'complete the booking', from: ['in_test'], event: 'completed', change: async () => ({ state: 'completed' }) },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      await answerTransition({ caller, params, deps, req, res }, { action: 'completed', attempt: 'complete the booking', from: ['in_test'], event: 'completed', change: async () => ({ state: 'completed' }) });
     },
   }),
   route({
@@ -447,36 +390,29 @@ export const bookingRoutes: RouteDef[] = [
     body: cancelBookingSchema,
     sample: { params: sampleOf('confirmed'), body: () => ({ reason: 'The model is not ready in time.' }), expect: 200, crossOrganisation: true },
     handler: async ({ caller, params, body, deps, req, res }) => {
-      const { booking, context } = await transitionBooking(
-        deps,
-        caller,
-        params.id ?? '',
-        {
-          action: 'cancelled',
-          attempt: 'cancel the booking',
-          from: ['requested', 'quoted', 'counter_proposed', 'confirmed'],
-          event: 'cancelled',
-          change: async (b, trx, ctx) => {
-            const preview = cancellationPreview(b, ctx.rules, ctx.timeZone, isStaff(caller));
-            if (body.expectedFeeMinor !== undefined && body.expectedFeeMinor !== preview.feeMinor) {
-              throw new HttpError(409, 'Fee changed', `The cancellation fee is now ${preview.feeMinor} minor units, not ${body.expectedFeeMinor}. Check the preview again before cancelling.`);
-            }
-            await Quote.query(trx).patch({ state: 'withdrawn' }).where('bookingId', b.id).whereIn('state', ['offered', 'accepted']);
-            const wasConfirmed = b.state === 'confirmed';
-            return {
-              state: 'cancelled',
-              holdExpiresAt: provisionalStates.includes(b.state) ? null : b.holdExpiresAt,
-              cancelledAt: new Date(),
-              cancelledBy: caller.id,
-              cancellationReason: body.reason,
-              cancellationFeeMinor: preview.feeMinor,
-              icsSequence: wasConfirmed ? b.icsSequence + 1 : b.icsSequence,
-            };
-          },
+      await answerTransition({ caller, params, deps, req, res }, {
+        action: 'cancelled',
+        attempt: 'cancel the booking',
+        from: ['requested', 'quoted', 'counter_proposed', 'confirmed'],
+        event: 'cancelled',
+        change: async (b, trx, ctx) => {
+          const preview = cancellationPreview(b, ctx.rules, ctx.timeZone, isStaff(caller));
+          if (body.expectedFeeMinor !== undefined && body.expectedFeeMinor !== preview.feeMinor) {
+            throw new HttpError(409, 'Fee changed', `The cancellation fee is now ${preview.feeMinor} minor units, not ${body.expectedFeeMinor}. Check the preview again before cancelling.`);
+          }
+          await Quote.query(trx).patch({ state: 'withdrawn' }).where('bookingId', b.id).whereIn('state', ['offered', 'accepted']);
+          const wasConfirmed = b.state === 'confirmed';
+          return {
+            state: 'cancelled',
+            holdExpiresAt: provisionalStates.includes(b.state) ? null : b.holdExpiresAt,
+            cancelledAt: new Date(),
+            cancelledBy: caller.id,
+            cancellationReason: body.reason,
+            cancellationFeeMinor: preview.feeMinor,
+            icsSequence: wasConfirmed ? b.icsSequence + 1 : b.icsSequence,
+          };
         },
-        req.log,
-      );
-      res.json(toBooking(booking, context.timeZone));
+      });
     },
   }),
 ];
