@@ -9,3 +9,4 @@ export * from './paging';
 export * from './ingest';
 export * from './planner';
 export * from './booking';
+export * from './approval';

@@ -32,3 +32,7 @@ export { BookingAttachment } from './models/booking-attachment';
 export { MaintenanceBlock } from './models/maintenance-block';
 export { expireLapsedHolds } from './booking-holds';
 export { ImportProfile } from './models/import-profile';
+export { SigningRight } from './models/signing-right';
+export { PointExclusion } from './models/point-exclusion';
+export { Submission, SubmissionReduction } from './models/submission';
+export { ResultSheet } from './models/result-sheet';

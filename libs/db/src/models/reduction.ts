@@ -27,6 +27,8 @@ export class Reduction extends BaseModel {
   createdBy!: string;
   startedAt!: Date | null;
   finishedAt!: Date | null;
+  /** When a submission naming this reduction was approved; from then on the database refuses any change. */
+  approvedAt!: Date | null;
 
   static override get jsonAttributes(): string[] {
     return ['config', 'warnings', 'summary'];

@@ -1,0 +1,32 @@
+import type { SubmissionState } from '@tunnelwright/contracts';
+import { BaseModel } from '../base-model';
+
+/** A test's chosen reductions (one per run) put forward for approval, and the signatory's decision. */
+export class Submission extends BaseModel {
+  static override tableName = 'submissions';
+
+  testId!: string;
+  sequence!: number;
+  state!: SubmissionState;
+  note!: string;
+  submittedBy!: string;
+  decidedBy!: string | null;
+  decidedAt!: Date | null;
+  decisionReason!: string | null;
+}
+
+/** One reduction named by a submission; fixed once submitted. */
+export class SubmissionReduction extends BaseModel {
+  static override tableName = 'submission_reductions';
+  static override get idColumn(): string[] {
+    return ['submissionId', 'reductionId'];
+  }
+
+  submissionId!: string;
+  reductionId!: string;
+  runId!: string;
+
+  override $beforeUpdate(): void {
+    // The table has no timestamps.
+  }
+}
