@@ -39,6 +39,33 @@ describe('/api/users', () => {
       expect(response.body.total).toBe(0);
     });
 
+    it('role=technician lists technicians only; active=true leaves out deactivated ones', async () => {
+      const tag = fixtures.unique().replace('-', '');
+      const working = await fixtures.user({ role: 'technician', name: `Rowan ${tag}` });
+      const away = await fixtures.user({ role: 'technician', name: `Sorrel ${tag}`, active: false });
+      await fixtures.user({ role: 'analyst', name: `Tamsin ${tag}` });
+      await fixtures.user({ role: 'customer', name: `Umber ${tag}` });
+      const technicians = await as(manager).get(`/api/users?q=${tag}&role=technician`);
+      expect(technicians.status).toBe(200);
+      expect(technicians.body.total).toBe(2);
+      expect(technicians.body.items.map((u: { id: string }) => u.id).sort()).toEqual([working.id, away.id].sort());
+      const active = await as(manager).get(`/api/users?q=${tag}&role=technician&active=true`);
+      expect(active.body.total).toBe(1);
+      expect(active.body.items.map((u: { id: string; role: string; active: boolean }) => [u.id, u.role, u.active])).toEqual([[working.id, 'technician', true]]);
+      const deactivated = await as(manager).get(`/api/users?q=${tag}&active=false`);
+      expect(deactivated.body.items.map((u: { id: string }) => u.id)).toEqual([away.id]);
+    });
+
+    it('an unknown role or an active flag that is not true/false → 400 naming the field', async () => {
+      const role = await as(manager).get('/api/users?role=pilot');
+      expect(role.status).toBe(400);
+      expect(role.body.errors.map((e: { field: string }) => e.field)).toEqual(['role']);
+      expect(role.body.errors[0].message).toMatch(/customer, technician, analyst, lab_manager/);
+      const active = await as(manager).get('/api/users?active=yes');
+      expect(active.status).toBe(400);
+      expect(active.body.errors.map((e: { field: string }) => e.field)).toEqual(['active']);
+    });
+
     it('bad sort and page size → 400 naming the fields', async () => {
       const response = await as(manager).get('/api/users?sort=password&pageSize=1000');
       expect(response.status).toBe(400);

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { emailSchema } from './auth';
-import { roleSchema } from './roles';
+import { roles, roleSchema } from './roles';
 
 export const organisationKindSchema = z.enum(['lab', 'customer']);
 export type OrganisationKind = z.infer<typeof organisationKindSchema>;
@@ -55,9 +55,12 @@ export type UpdateProfileRequest = z.infer<typeof updateProfileSchema>;
 export const userSortSchema = z.enum(['name', 'email', 'role', 'createdAt']);
 export type UserSort = z.infer<typeof userSortSchema>;
 
-/** GET /api/users query: free-text search on name and e-mail, sorting and 1-based paging. */
+/** GET /api/users query: free-text search on name and e-mail, optionally one role and only active accounts, sorting and 1-based paging. */
 export const userListQuerySchema = z.object({
   q: z.string().trim().max(120).optional(),
+  role: z.enum(roles, { message: `Role must be one of ${roles.join(', ')}` }).optional(),
+  /** `true`: only accounts that may sign in; `false`: only deactivated ones; absent: both. */
+  active: z.enum(['true', 'false'], { message: 'Active must be true or false' }).transform((v) => v === 'true').optional(),
   sort: userSortSchema.default('name'),
   order: z.enum(['asc', 'desc']).default('asc'),
   page: z.coerce.number({ message: 'Page must be a number' }).int().min(1, { message: 'Pages count from 1' }).default(1),

@@ -31,15 +31,17 @@ export const userRoutes: RouteDef[] = [
     method: 'get',
     path: '/',
     access: ['lab_manager'],
-    summary: 'Search and page through users',
+    summary: 'Search and page through users, optionally of one role and only active (or only deactivated) ones',
     query: userListQuerySchema,
-    sample: { query: { q: 'a', sort: 'email', order: 'desc', page: '1', pageSize: '5' }, expect: 200 },
+    sample: { query: { q: 'a', role: 'technician', active: 'true', sort: 'email', order: 'desc', page: '1', pageSize: '5' }, expect: 200 },
     handler: async ({ query, res }) => {
       const builder = User.query().joinRelated('organisation');
       if (query.q) {
         const pattern = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
         builder.where((w) => w.whereILike('users.name', pattern).orWhereILike('users.email', pattern).orWhereILike('organisation.name', pattern));
       }
+      if (query.role) builder.where('users.role', query.role);
+      if (query.active !== undefined) builder.where('users.active', query.active);
       const total = await builder.clone().resultSize();
       const items = await builder
         .select('users.*')

@@ -57,8 +57,9 @@ export class LabBookingsPage {
 
   protected readonly bookings = rxResource({ stream: () => this.api.list() });
   protected readonly services = rxResource({ stream: () => this.catalogue.services(true) });
+  /** Active technicians, the only users a booking may be assigned to; the API does the filtering. */
   protected readonly technicians = rxResource({
-    stream: () => this.users.list({ q: '', sort: 'name', order: 'asc', page: 1, pageSize: 100 }).pipe(map((page) => page.items.filter((user) => user.role === 'technician' && user.active))),
+    stream: () => this.users.list({ q: '', role: 'technician', active: true, sort: 'name', order: 'asc', page: 1, pageSize: 100 }).pipe(map((page) => page.items)),
   });
   protected readonly loadError = computed(() => {
     const error = this.bookings.error();

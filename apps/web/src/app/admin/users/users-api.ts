@@ -4,6 +4,7 @@ import type {
   CreateInvitationRequest,
   Organisation,
   Page,
+  Role,
   UpdateUserRequest,
   UserSummary,
 } from '@tunnelwright/contracts';
@@ -19,6 +20,10 @@ export interface UserQuery {
   readonly order: 'asc' | 'desc';
   readonly page: number;
   readonly pageSize: number;
+  /** Only users of this role. */
+  readonly role?: Role;
+  /** Only accounts that may sign in (true) or only deactivated ones (false). */
+  readonly active?: boolean;
 }
 
 /** Lab-manager calls about accounts, organisations and invitations. */
@@ -35,6 +40,12 @@ export class UsersApi {
     };
     if (query.q) {
       params['q'] = query.q;
+    }
+    if (query.role) {
+      params['role'] = query.role;
+    }
+    if (query.active !== undefined) {
+      params['active'] = String(query.active);
     }
     return this.http.get<Page<UserSummary>>('/api/users', { params });
   }
