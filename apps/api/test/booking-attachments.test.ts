@@ -88,6 +88,42 @@ describe('/api/bookings/:id/attachments', () => {
       expect((await request(t.app).get(`/api/bookings/${bookingId}/attachments/${first.id}`).set('Authorization', auth(rival))).status).toBe(404);
     });
 
+    it('open states take files (the lab manager adds to a confirmed and an in-test booking); closed states and a lapsed hold → 409 and no row', async () => {
+      const manager = await fixtures.user({ role: 'lab_manager' });
+      const byState = async (state: string, holdExpiresAt: Date | null = null) => {
+        const start = new Date(Math.ceil((Date.now() + (100 + Math.random() * 200) * 24 * hour) / hour) * hour);
+        const created = await request(t.app)
+          .post('/api/bookings')
+          .set('Authorization', auth(customer))
+          .send({ tunnelId: await fixtures.tunnelId(), start: start.toISOString(), end: new Date(start.getTime() + hour).toISOString(), articles: [{ name: `Mast ${state}`, referenceAreaKind: 'frontal' }] });
+        expect(created.status, JSON.stringify(created.body)).toBe(201);
+        await t.knex('bookings').where('id', created.body.id).update({ state, hold_expires_at: holdExpiresAt });
+        return created.body.id as string;
+      };
+      const rows = async (id: string) => Number((await t.knex('booking_attachments').where('booking_id', id).count({ n: '*' }).first())?.n);
+      for (const state of ['confirmed', 'in_test']) {
+        const id = await byState(state);
+        const response = await upload(manager, id).attach('files', pdf(), `${state}.pdf`);
+        expect(response.status, `${state}: ${JSON.stringify(response.body)}`).toBe(201);
+        expect(await rows(id)).toBe(1);
+      }
+      for (const state of ['completed', 'declined', 'rejected', 'expired']) {
+        const id = await byState(state);
+        const response = await upload(customer, id).attach('files', pdf(), `${state}.pdf`);
+        expect(response.status, state).toBe(409);
+        expect(response.body.detail).toMatch(/only be attached to an open booking/);
+        expect(await rows(id)).toBe(0);
+      }
+      // Still "requested" in the table, but the hold ran out before the sweep came round.
+      const lapsed = await byState('requested', new Date(Date.now() - 60_000));
+      const response = await upload(customer, lapsed).attach('files', pdf(), 'after-the-hold.pdf');
+      expect(response.status).toBe(409);
+      expect(response.body.detail).toMatch(/provisional hold has lapsed/);
+      expect(await rows(lapsed)).toBe(0);
+      const held = await byState('quoted', new Date(Date.now() + 24 * hour));
+      expect((await upload(customer, held).attach('files', png, 'rig.png')).status).toBe(201);
+    });
+
     it('a cancelled booking → 409', async () => {
       const start = new Date(Math.ceil((Date.now() + 91 * 24 * hour) / hour) * hour);
       const created = await request(t.app)

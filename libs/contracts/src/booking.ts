@@ -22,6 +22,18 @@ export type BookingState = z.infer<typeof bookingStateSchema>;
 export const slotHoldingStates: readonly BookingState[] = ['requested', 'quoted', 'counter_proposed', 'confirmed', 'in_test'];
 /** States whose hold lapses at `holdExpiresAt`. */
 export const provisionalStates: readonly BookingState[] = ['requested', 'quoted', 'counter_proposed'];
+/**
+ * States in which drawings and photos can still be added: the booking is open. A provisional booking whose
+ * hold has lapsed is closed, even before the sweep marks it expired.
+ */
+export const attachableStates: readonly BookingState[] = [...provisionalStates, 'confirmed', 'in_test'];
+
+/** Whether files can be added to a booking in `state` with hold `holdExpiresAt` at `now`. */
+export function acceptsAttachments(booking: { state: BookingState; holdExpiresAt: Date | string | null }, now: Date = new Date()): boolean {
+  if (!attachableStates.includes(booking.state)) return false;
+  if (!provisionalStates.includes(booking.state) || booking.holdExpiresAt === null) return true;
+  return new Date(booking.holdExpiresAt).getTime() > now.getTime();
+}
 
 export const quoteStateSchema = z.enum(['offered', 'accepted', 'rejected', 'withdrawn']);
 export type QuoteState = z.infer<typeof quoteStateSchema>;

@@ -1,5 +1,5 @@
 import { extname } from 'node:path';
-import { provisionalStates } from '@tunnelwright/contracts';
+import { acceptsAttachments, provisionalStates } from '@tunnelwright/contracts';
 import { Booking, BookingAttachment, isStaff, recordAudit, type User } from '@tunnelwright/db';
 import type { Request, Response } from 'express';
 import multer from 'multer';
@@ -35,7 +35,12 @@ async function bookingFor(caller: User, id: string): Promise<Booking> {
   return booking;
 }
 
-const openStates = [...provisionalStates, 'confirmed', 'in_test'];
+/** The 409 unless files can still be added to `booking`: it is open and, if provisional, its hold has not lapsed. */
+function assertAcceptsAttachments(booking: Booking): void {
+  if (acceptsAttachments(booking)) return;
+  const why = provisionalStates.includes(booking.state) ? 'its provisional hold has lapsed' : `it is ${booking.state.replace('_', ' ')}`;
+  throw new HttpError(409, 'Not possible in this state', `Files can only be attached to an open booking; this one is closed because ${why}.`);
+}
 
 /** /api/bookings/:id/attachments: drawings and documents for a booking, stored content-addressed. */
 export const bookingAttachmentRoutes: RouteDef[] = [
@@ -48,7 +53,8 @@ export const bookingAttachmentRoutes: RouteDef[] = [
     sample: { params: async (f) => ({ id: await sampleBookingId(f, 'requested') }), expect: 400, crossOrganisation: true },
     handler: async ({ caller, params, deps, req, res }) => {
       const booking = await bookingFor(caller, params.id ?? '');
-      if (!openStates.includes(booking.state)) throw new HttpError(409, 'Not possible in this state', `Files can only be attached to an open booking; this one is ${booking.state.replace('_', ' ')}.`);
+      // Refused before the body is read, so a closed booking costs no upload; checked again under lock below.
+      assertAcceptsAttachments(booking);
       const files = await receiveFiles(req, res);
       if (files.length === 0) throw HttpError.field('files', 'Attach at least one file in the field "files"');
       const checked = files.map((file, index) => {
@@ -60,6 +66,10 @@ export const bookingAttachmentRoutes: RouteDef[] = [
       });
       const stored = await Promise.all(checked.map(async (c) => ({ ...c, sha256: await storeAttachment(c.file.buffer) })));
       const created = await deps.knex.transaction(async (trx) => {
+        // The booking may have been cancelled or its hold lapsed while the files arrived.
+        const locked = await Booking.query(trx).findById(booking.id).forUpdate();
+        if (!locked) throw HttpError.notFound('The booking');
+        assertAcceptsAttachments(locked);
         const rows = await BookingAttachment.query(trx)
           .insert(stored.map((s) => ({ bookingId: booking.id, filename: s.file.originalname.slice(0, 255), contentType: s.contentType, sizeBytes: s.file.size, sha256: s.sha256, uploadedBy: caller.id })))
           .returning('*');

@@ -40,7 +40,7 @@ import type { AttachmentUpload } from './attachment-upload';
                   <span class="state failed">{{ upload.message }}</span>
                 }
               }
-              @if (upload.phase === 'waiting' && !disabled()) {
+              @if ((upload.phase === 'waiting' || upload.phase === 'failed') && !disabled()) {
                 <button mat-icon-button type="button" [attr.aria-label]="'Remove ' + upload.file.name" (click)="removed.emit(upload.key)">
                   <mat-icon class="material-icons">close</mat-icon>
                 </button>

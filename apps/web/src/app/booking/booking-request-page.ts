@@ -16,9 +16,8 @@ import { problemFieldErrors, problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { focusFirstInvalid } from '../shared/focus-first-invalid';
 import { PlannerApi } from '../planner/planner-api';
-import { chooseAttachments } from './attachment-limits';
 import { AttachmentPicker } from './attachment-picker';
-import type { AttachmentUpload } from './attachment-upload';
+import { AttachmentQueue } from './attachment-queue';
 import { BookingApi } from './booking-api';
 import { articleForm, bookingRequestForm, bookingRequestOf } from './booking-request-form';
 import { localValueAfterHours, userTimeZone } from './lab-time';
@@ -118,17 +117,16 @@ export class BookingRequestPage implements OnInit {
   protected readonly planHours = computed(() => (this.chosenPlan.hasValue() ? (this.chosenPlan.value()?.evaluation.duration.hours ?? null) : null));
   private readonly start = toSignal(this.form.controls.start.valueChanges, { initialValue: '' });
 
-  protected readonly uploads = signal<AttachmentUpload[]>([]);
-  protected readonly refusals = signal<string[]>([]);
+  private readonly queue = new AttachmentQueue(this.bookings);
+  protected readonly uploads = this.queue.uploads;
+  protected readonly refusals = this.queue.refusals;
   /** The request once the lab has it; files are attached to it, and a retry sends only what failed. */
   protected readonly created = signal<Booking | null>(null);
   protected readonly uploadError = computed(() => {
-    const failed = this.uploads().filter((upload) => upload.phase === 'failed').length;
-    const busy = this.uploads().some((upload) => upload.phase === 'uploading');
-    if (!this.created() || busy || failed === 0) return null;
+    const failed = this.queue.failed();
+    if (!this.created() || this.queue.busy() || failed === 0) return null;
     return `The request was sent, but ${failed === 1 ? 'one file' : `${failed} files`} could not be attached.`;
   });
-  private nextKey = 0;
 
   constructor() {
     // The end follows from the start whenever a chosen plan says how long the test takes.
@@ -151,14 +149,11 @@ export class BookingRequestPage implements OnInit {
   }
 
   protected addFiles(files: File[]): void {
-    const choice = chooseAttachments(files, this.uploads().length);
-    this.refusals.set(choice.refusals);
-    this.uploads.update((uploads) => [...uploads, ...choice.accepted.map((file): AttachmentUpload => ({ key: this.nextKey++, file, phase: 'waiting', progress: 0, message: '' }))]);
+    this.queue.add(files);
   }
 
   protected removeFile(key: number): void {
-    this.refusals.set([]);
-    this.uploads.update((uploads) => uploads.filter((upload) => upload.key !== key));
+    this.queue.remove(key);
   }
 
   protected get articles() {
@@ -209,28 +204,7 @@ export class BookingRequestPage implements OnInit {
   /** Sends every file not yet stored, each in its own call so each shows its own progress; then opens the list. */
   protected sendFiles(): void {
     const booking = this.created();
-    if (!booking) return;
-    const pending = this.uploads().filter((upload) => upload.phase === 'waiting' || upload.phase === 'failed');
-    if (pending.length === 0) {
-      this.finish(booking);
-      return;
-    }
-    for (const upload of pending) {
-      this.patchUpload(upload.key, { phase: 'uploading', progress: 0, message: '' });
-      this.bookings.attach(booking.id, upload.file).subscribe({
-        next: (event) => this.patchUpload(upload.key, event.kind === 'progress' ? { progress: event.fraction } : { phase: 'stored', progress: 1 }),
-        error: (error: unknown) => {
-          this.patchUpload(upload.key, { phase: 'failed', message: problemMessage(error, 'Not attached.') });
-        },
-        complete: () => {
-          if (this.uploads().every((item) => item.phase === 'stored')) this.finish(booking);
-        },
-      });
-    }
-  }
-
-  private patchUpload(key: number, change: Partial<AttachmentUpload>): void {
-    this.uploads.update((uploads) => uploads.map((upload) => (upload.key === key ? { ...upload, ...change } : upload)));
+    if (booking) this.queue.send(booking.id, { allStored: () => this.finish(booking) });
   }
 
   private finish(booking: Booking): void {

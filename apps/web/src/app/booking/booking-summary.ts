@@ -1,8 +1,9 @@
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, signal } from '@angular/core';
 import { MatCardModule } from '@angular/material/card';
 import { MatChipsModule } from '@angular/material/chips';
-import type { Booking } from '@tunnelwright/contracts';
+import { acceptsAttachments, type Booking, type BookingAttachment } from '@tunnelwright/contracts';
 import { formatMoney } from '../shared/money';
+import { BookingAttachmentAdder } from './booking-attachment-adder';
 import { BookingAttachmentList } from './booking-attachment-list';
 import { bookingStateLabels } from './booking-state-labels';
 import { formatPeriod } from './lab-time';
@@ -13,7 +14,7 @@ import { referenceAreaKindLabels } from './reference-area-kind-labels';
 @Component({
   selector: 'tw-booking-summary',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [MatCardModule, MatChipsModule, BookingAttachmentList],
+  imports: [MatCardModule, MatChipsModule, BookingAttachmentList, BookingAttachmentAdder],
   templateUrl: './booking-summary.html',
   styles: `
     mat-card {
@@ -52,6 +53,16 @@ export class BookingSummary {
   readonly booking = input.required<Booking>();
   /** Whether to show the customer organisation (for lab staff). */
   readonly showOrganisation = input(false);
+  /** Whether the viewer's role may add files (customers and lab managers); the booking must still be open. */
+  readonly mayAttach = input(false);
+
+  /** Files added from this card since the booking was loaded; dropped once a reload lists them too. */
+  private readonly added = signal<readonly BookingAttachment[]>([]);
+  protected readonly attachments = computed(() => {
+    const known = this.booking().attachments;
+    return [...known, ...this.added().filter((extra) => !known.some((attachment) => attachment.id === extra.id))];
+  });
+  protected readonly canAttach = computed(() => this.mayAttach() && acceptsAttachments(this.booking()));
 
   protected readonly stateLabels = bookingStateLabels;
   protected readonly areaLabels = referenceAreaKindLabels;
@@ -62,6 +73,10 @@ export class BookingSummary {
     return counter ? formatPeriod(counter.period, this.booking().timeZone) : null;
   });
   protected readonly speeds = computed(() => this.booking().testPlan.speeds.join(', '));
+
+  protected attached(attachments: readonly BookingAttachment[]): void {
+    this.added.update((added) => [...added, ...attachments]);
+  }
 
   protected money(minor: number, currency: string | null): string {
     return currency ? formatMoney(minor, currency) : String(minor);
