@@ -34,5 +34,5 @@ export { expireLapsedHolds } from './booking-holds';
 export { ImportProfile } from './models/import-profile';
 export { SigningRight } from './models/signing-right';
 export { PointExclusion } from './models/point-exclusion';
-export { Submission, SubmissionReduction } from './models/submission';
+export { Submission } from './models/submission';
 export { ResultSheet } from './models/result-sheet';

@@ -13,14 +13,19 @@ import { meRoutes } from './me';
 import { occupancyRoutes } from './occupancy';
 import { organisationRoutes } from './organisations';
 import { planRoutes } from './plans';
+import { pointExclusionRoutes } from './point-exclusions';
 import { reductionRoutes } from './reductions';
+import { resultSheetRoutes } from './result-sheets';
 import type { Resource, RouteDef } from './route';
 import { runRoutes } from './runs';
 import { serviceRoutes } from './services';
 import { shapeRoutes } from './shapes';
+import { mySigningRightRoute, signingRightRoutes } from './signing-rights';
+import { submissionRoutes, testSubmissionRoutes } from './submissions';
 import { testRoutes } from './tests';
 import { tunnelRoutes } from './tunnels';
 import { userRoutes } from './users';
+import { verifyRoutes } from './verify';
 
 /**
  * Every route of the API, declared once. `app.ts` mounts one Router per resource built from this table,
@@ -30,6 +35,7 @@ export const resources: Resource[] = [
   { mount: '/api/health', routes: healthRoutes },
   { mount: '/api/auth', routes: authRoutes },
   { mount: '/api/me', routes: meRoutes },
+  { mount: '/api/me', routes: [mySigningRightRoute] },
   { mount: '/api/organisations', routes: organisationRoutes },
   { mount: '/api/users', routes: userRoutes },
   { mount: '/api/invitations', routes: invitationRoutes },
@@ -44,6 +50,12 @@ export const resources: Resource[] = [
   { mount: '/api/import-profiles', routes: importProfileRoutes },
   { mount: '/api/runs', routes: runRoutes },
   { mount: '/api/reductions', routes: reductionRoutes },
+  { mount: '/api/reductions', routes: pointExclusionRoutes },
+  { mount: '/api/tests', routes: testSubmissionRoutes },
+  { mount: '/api/submissions', routes: submissionRoutes },
+  { mount: '/api/signing-rights', routes: signingRightRoutes },
+  { mount: '/api/result-sheets', routes: resultSheetRoutes },
+  { mount: '/api/verify', routes: verifyRoutes },
   { mount: '/api/shapes', routes: shapeRoutes },
   { mount: '/api/plans', routes: planRoutes },
   { mount: '/api/bookings', routes: bookingRoutes },

@@ -14,19 +14,3 @@ export class Submission extends BaseModel {
   decidedAt!: Date | null;
   decisionReason!: string | null;
 }
-
-/** One reduction named by a submission; fixed once submitted. */
-export class SubmissionReduction extends BaseModel {
-  static override tableName = 'submission_reductions';
-  static override get idColumn(): string[] {
-    return ['submissionId', 'reductionId'];
-  }
-
-  submissionId!: string;
-  reductionId!: string;
-  runId!: string;
-
-  override $beforeUpdate(): void {
-    // The table has no timestamps.
-  }
-}
