@@ -419,5 +419,26 @@ describe('/api/bookings', () => {
       expect((Date.parse(booking.body.holdExpiresAt) - Date.now()) / hour).toBeLessThanOrEqual(24);
       await request(t.app).put('/api/bookings/settings').set('Authorization', auth(manager)).send({ holdHours: current.holdHours, lateCancellationDays: current.lateCancellationDays, lateCancellationPercent: current.lateCancellationPercent });
     });
+
+    it('each change leaves an audit row naming the manager with the rules before and after; a refused change leaves none and changes nothing', async () => {
+      const current = (await request(t.app).get('/api/bookings/settings').set('Authorization', auth(manager))).body;
+      const rules = { holdHours: current.holdHours, lateCancellationDays: current.lateCancellationDays, lateCancellationPercent: current.lateCancellationPercent };
+      const auditRows = () => t.knex('audit_entries').where({ action: 'booking_settings.updated', actorId: manager.id }).orderBy('createdAt', 'desc');
+      const rowsBefore = (await auditRows()).length;
+      const refused = await request(t.app).put('/api/bookings/settings').set('Authorization', auth(manager)).send({ ...rules, holdHours: 2.5 });
+      expect(refused.status).toBe(400);
+      expect(refused.body.errors.map((e: { field: string }) => e.field)).toEqual(['holdHours']);
+      expect(await auditRows()).toHaveLength(rowsBefore);
+      expect((await request(t.app).get('/api/bookings/settings').set('Authorization', auth(manager))).body.holdHours).toBe(rules.holdHours);
+
+      const changed = { holdHours: 36, lateCancellationDays: 10, lateCancellationPercent: 30 };
+      expect((await request(t.app).put('/api/bookings/settings').set('Authorization', auth(manager)).send(changed)).status).toBe(200);
+      const rows = await auditRows();
+      expect(rows).toHaveLength(rowsBefore + 1);
+      expect(rows[0].entity).toBe('organisation');
+      expect(rows[0].before).toEqual(rules);
+      expect(rows[0].after).toEqual(changed);
+      await request(t.app).put('/api/bookings/settings').set('Authorization', auth(manager)).send(rules);
+    });
   });
 });

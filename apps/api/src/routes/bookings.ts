@@ -83,7 +83,8 @@ export const bookingRoutes: RouteDef[] = [
       const context = await deps.knex.transaction(async (trx) => {
         const lab = await Organisation.query(trx).findOne({ kind: 'lab' }).forUpdate();
         if (!lab) throw HttpError.notFound('The lab');
-        const before = lab.settings['booking'] ?? null;
+        // The rules in force, defaults included, so the audit row shows what the change replaced.
+        const before = (await loadLabBookingContext(trx)).rules;
         await Organisation.query(trx).patchAndFetchById(lab.id, { settings: { ...lab.settings, booking: body } });
         await recordAudit(trx, { actorId: caller.id, action: 'booking_settings.updated', entity: 'organisation', entityId: lab.id, before, after: body });
         return lab;

@@ -18,6 +18,11 @@ export class BookingApi {
     return this.http.get<LabBookingSettings>('/api/bookings/settings');
   }
 
+  /** Replaces the lab's booking rules (lab managers); the API records the change in the audit log. */
+  saveSettings(rules: BookingSettings): Observable<LabBookingSettings> {
+    return this.http.put<LabBookingSettings>('/api/bookings/settings', rules);
+  }
+
   /** Bookings, soonest first. */
   list(): Observable<Booking[]> {
     return this.http.get<Booking[]>('/api/bookings');

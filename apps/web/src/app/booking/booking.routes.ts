@@ -1,7 +1,7 @@
 import { Routes } from '@angular/router';
 import { roleGuard } from '../core/role-guard';
 
-/** Customers' bookings, lab managers' answers and calendar, technicians' week. */
+/** Customers' bookings, lab managers' answers, calendar and booking rules, technicians' week. */
 export const bookingRoutes: Routes = [
   {
     path: 'bookings',
@@ -26,6 +26,12 @@ export const bookingRoutes: Routes = [
     title: 'Calendar · Tunnelwright',
     canActivate: [roleGuard(['lab_manager'])],
     loadComponent: () => import('./lab-calendar-page').then((m) => m.LabCalendarPage),
+  },
+  {
+    path: 'booking-rules',
+    title: 'Booking rules · Tunnelwright',
+    canActivate: [roleGuard(['lab_manager'])],
+    loadComponent: () => import('./booking-rules-page').then((m) => m.BookingRulesPage),
   },
   {
     path: 'my-week',

@@ -20,7 +20,7 @@ describe('navItemsFor', () => {
   });
 
   it('shows a lab manager the administration sections and, in demo mode, the dev mailbox', () => {
-    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Users', 'Tunnels', 'Services', 'Audit log', 'Dev mailbox']);
+    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Users', 'Tunnels', 'Services', 'Booking rules', 'Audit log', 'Dev mailbox']);
   });
 
   it('hides the dev mailbox when demo mode is off', () => {

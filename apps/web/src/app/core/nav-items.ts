@@ -30,6 +30,7 @@ export const navItemsByRole: Readonly<Record<Role, readonly NavItem[]>> = {
     { label: 'Users', path: '/admin/users', icon: 'group' },
     { label: 'Tunnels', path: '/admin/tunnels', icon: 'air' },
     { label: 'Services', path: '/admin/services', icon: 'sell' },
+    { label: 'Booking rules', path: '/booking-rules', icon: 'rule' },
     { label: 'Audit log', path: '/admin/audit', icon: 'history' },
     { label: 'Dev mailbox', path: '/dev-mailbox', icon: 'mail', demoOnly: true },
   ],
