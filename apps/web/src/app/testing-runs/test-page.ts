@@ -7,6 +7,8 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 import type { ReductionState, RunKind } from '@tunnelwright/contracts';
+import { ApprovalPanel } from '../approval/approval-panel';
+import { TestAuditPanel } from '../approval/test-audit-panel';
 import { AuthService } from '../core/auth-service';
 import { problemMessage } from '../core/problem-message';
 import { SafetyNotice } from '../core/safety-notice';
@@ -21,7 +23,7 @@ import { reductionStateLabels, runKindLabels, testStateLabels } from './run-labe
 @Component({
   selector: 'tw-test-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [RouterLink, MatButtonModule, MatChipsModule, MatIconModule, MatProgressBarModule, MatTableModule, CdYawChart, EmptyState, ErrorBanner, SafetyNotice],
+  imports: [RouterLink, MatButtonModule, MatChipsModule, MatIconModule, MatProgressBarModule, MatTableModule, CdYawChart, EmptyState, ErrorBanner, SafetyNotice, ApprovalPanel, TestAuditPanel],
   templateUrl: './test-page.html',
   styles: `
     :host {
@@ -44,6 +46,9 @@ import { reductionStateLabels, runKindLabels, testStateLabels } from './run-labe
       font: var(--mat-sys-body-small);
       margin-top: 16px;
     }
+    .section {
+      margin-top: 32px;
+    }
   `,
 })
 export class TestPage {
@@ -55,6 +60,7 @@ export class TestPage {
 
   /** Whether the caller is laboratory staff (customers see runs, not reductions, until approval). */
   protected readonly isStaff = computed(() => this.role() !== 'customer' && this.role() !== null);
+  protected readonly isLabManager = computed(() => this.role() === 'lab_manager');
   protected readonly isTechnician = computed(() => this.role() === 'technician' || this.role() === 'lab_manager');
   protected readonly test = rxResource({ params: () => this.id(), stream: ({ params }) => this.api.test(params) });
   protected readonly runs = rxResource({
