@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { testSchema } from './ingest';
 
 /**
  * Review, approval and issue of certified result sheets, and their public verification.
@@ -165,3 +166,20 @@ export type VerificationCheck = z.infer<typeof verificationCheckSchema>;
 /** Where a customer's test stands, in the words the customer portal uses. */
 export const customerTestStageSchema = z.enum(['booked', 'in_test', 'being_checked', 'certified']);
 export type CustomerTestStage = z.infer<typeof customerTestStageSchema>;
+
+/** Where a test stands on its way to a certified sheet, for the test lists and pages. */
+export const testProgressSchema = z.object({
+  customerStage: customerTestStageSchema,
+  approval: z.object({
+    state: z.enum(['none', 'awaiting_approval', 'sent_back', 'approved', 'issued']),
+    submissionId: z.uuid().nullable(),
+    /** The test's valid sheet, once one is issued. */
+    sheetId: z.uuid().nullable(),
+    reportNumber: z.string().nullable(),
+  }),
+});
+export type TestProgress = z.infer<typeof testProgressSchema>;
+
+/** GET /api/tests and GET /api/tests/:id: the test with where it stands. */
+export const testWithProgressSchema = testSchema.extend({ progress: testProgressSchema });
+export type TestWithProgress = z.infer<typeof testWithProgressSchema>;

@@ -2,6 +2,7 @@ import { calibrationOverrideInputSchema, runInputSchema, testInputSchema, type T
 import { Balance, CalibrationOverride, Organisation, RawFile, recordAudit, Run, scopeToCaller, TestArticle, TestRecord, Tunnel } from '@tunnelwright/db';
 import type { Knex } from 'knex';
 import { UniqueViolationError } from 'objection';
+import { testProgress } from '../approval/test-progress';
 import { HttpError } from '../errors/http-error';
 import { currentCalibration, isOverdue } from '../ingest/calibration-check';
 import { toRun, toTest } from '../ingest/ingest-presenters';
@@ -35,10 +36,12 @@ export const testRoutes: RouteDef[] = [
     method: 'get',
     path: '/',
     access: 'authenticated',
-    summary: 'List tests (customers: their own organisation)',
+    summary: 'List tests with where each stands (customers: their own organisation)',
     sample: { expect: 200 },
-    handler: async ({ caller, res }) => {
-      res.json((await scopeToCaller(TestRecord.query().orderBy('createdAt', 'desc'), caller)).map(toTest));
+    handler: async ({ caller, res, deps }) => {
+      const tests = await scopeToCaller(TestRecord.query().orderBy('createdAt', 'desc'), caller);
+      const progress = await testProgress(deps.knex, tests);
+      res.json(tests.map((t) => ({ ...toTest(t), progress: progress.get(t.id) })));
     },
   }),
   route({
@@ -47,8 +50,9 @@ export const testRoutes: RouteDef[] = [
     access: 'authenticated',
     summary: 'One test',
     sample: { params: async (f) => ({ id: await sampleTestId(f) }), expect: 200, crossOrganisation: true },
-    handler: async ({ caller, params, res }) => {
-      res.json(toTest(await visibleTest(caller, params.id ?? '')));
+    handler: async ({ caller, params, res, deps }) => {
+      const test = await visibleTest(caller, params.id ?? '');
+      res.json({ ...toTest(test), progress: (await testProgress(deps.knex, [test])).get(test.id) });
     },
   }),
   route({
