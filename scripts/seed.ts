@@ -6,6 +6,7 @@
 import type { Knex } from 'knex';
 import argon2 from 'argon2';
 import { createKnex, migrationConfig, Organisation, recordAudit, Service, Tunnel, User } from '@tunnelwright/db';
+import { seedApproval } from './seed/approval';
 import { seedBookings } from './seed/bookings';
 import { demoServices, demoTunnels } from './seed/catalogue';
 import { demoCustomers, demoLab, demoPassword, demoUsers } from './seed/demo-users';
@@ -76,6 +77,7 @@ try {
   await knex.migrate.latest(migrationConfig);
   const created = await seed(knex);
   await seedIngest(knex, created);
+  await seedApproval(knex, created, (process.env.PUBLIC_URL ?? 'http://localhost:3000').replace(/\/+$/, ''));
   console.log(created.length === 0 ? 'Demo data already present; nothing changed.' : `Created:\n  ${created.join('\n  ')}`);
   console.log(`\nDemo sign-ins (password for all: ${demoPassword}):`);
   for (const person of demoUsers) console.log(`  ${person.role.padEnd(12)} ${person.email.padEnd(34)} ${person.name} — ${person.organisation}`);

@@ -40,6 +40,12 @@ describe('scripts/seed.ts', () => {
       }
       const tunnels = await t.knex('tunnels').whereIn('kind', ['closed', 'open_jet']).select('kind');
       expect(new Set(tunnels.map((row: { kind: string }) => row.kind))).toEqual(new Set(['closed', 'open_jet']));
+      // One issued sheet that is current and the revision it superseded, and a submission left for the analyst.
+      const sheets = (await t.knex('resultSheets').join('tests', 'tests.id', 'resultSheets.testId').where('tests.title', 'Estate car yaw sweep, baseline and mirrors off').orderBy('revision').select('resultSheets.reportNumber', 'resultSheets.state', 'resultSheets.supersededById', 'resultSheets.id')) as { reportNumber: string; state: string; supersededById: string | null; id: string }[];
+      expect(sheets.map((s) => [s.reportNumber.replace(/^BAL-\d{4}-\d{4}-/, ''), s.state])).toEqual([['R1', 'superseded'], ['R2', 'valid']]);
+      expect(sheets[0]!.supersededById).toBe(sheets[1]!.id);
+      const waiting = await t.knex('submissions').join('tests', 'tests.id', 'submissions.testId').where({ 'tests.title': 'Delivery van drag at yaw, open jet', 'submissions.state': 'awaiting_approval' }).count({ n: '*' }).first();
+      expect(Number(waiting?.n)).toBe(1);
     }, 60_000);
   });
 });

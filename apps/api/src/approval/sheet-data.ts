@@ -70,7 +70,7 @@ export function correctionMethods(config: ReductionConfig): string[] {
       lines.push('Wake blockage: streamlined-body estimate from the measured drag');
       break;
     case 'maskell':
-      lines.push(`Wake blockage: Maskell's method for bluff bodies (θ = ${number(c.maskellTheta, 2)})`);
+      lines.push(`Wake blockage: Maskell's method for bluff bodies (Maskell factor ${number(c.maskellTheta, 2)})`);
       break;
     case 'given':
       lines.push(`Wake blockage: given factor ${number(c.givenWakeBlockage, 4)}`);
@@ -181,7 +181,7 @@ export async function buildSheetData(trx: Knex.Transaction, submission: Submissi
   const calibrationIds = reductions.map((r) => r.calibrationId).filter((id): id is string => id !== null);
   const calibration = calibrationIds.length > 0 ? await BalanceCalibration.query(trx).findById(calibrationIds[0]) : undefined;
   const balanceText = test.balance
-    ? `${test.balance.identifier}${test.balance.description ? ` (${test.balance.description})` : ''}${calibration ? `, calibration version ${calibration.version} of ${calibration.calibratedOn}` : ''}`
+    ? `${test.balance.identifier}${test.balance.description ? ` (${test.balance.description.replace(/\.+$/, '')})` : ''}${calibration ? `, calibration version ${calibration.version} of ${calibration.calibratedOn}` : ''}`
     : 'No balance recorded';
 
   const booking = test.bookingId ? await Booking.query(trx).findById(test.bookingId) : undefined;
