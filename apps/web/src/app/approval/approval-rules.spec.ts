@@ -1,6 +1,6 @@
 import type { Submission } from '@tunnelwright/contracts';
 import { submissionStateText } from './approval-labels';
-import { decisionBlock, defaultPicks, isRevision, issueBlock, pickedReductionIds, runChoices, type Caller } from './approval-rules';
+import { decisionBlock, defaultPicks, isRevision, issueBlock, pickedReductionIds, picksProblem, runChoices, type Caller } from './approval-rules';
 
 const uploader = { id: '0b7e5a3c-1d2f-4e6a-9b8c-7d6e5f4a3b2c', name: 'Nell Ashgrove' };
 const analyst: Caller = { id: '5c4b3a29-8f7e-4d6c-9b5a-4f3e2d1c0b9a', role: 'analyst', holdsSigningRight: true };
@@ -18,7 +18,7 @@ function reduction(runNumber: number, uploadedBy = uploader): Submission['reduct
   };
 }
 
-const waiting = { state: 'awaiting_approval' as const, reductions: [reduction(1), reduction(2)], sheet: null };
+const waiting = { state: 'awaiting_approval' as const, reductions: [reduction(1), reduction(2)], submittedBy: uploader, sheet: null };
 
 describe('decisionBlock', () => {
   it('lets an analyst with a signing right who uploaded none of the runs decide', () => {
@@ -34,6 +34,11 @@ describe('decisionBlock', () => {
     expect(decisionBlock(own, analyst)).toBe('You uploaded the raw file of runs 2 and 3, so a second person must check it: another analyst with a signing right decides.');
     const one = { ...waiting, reductions: [reduction(4, { id: analyst.id, name: 'Me' })] };
     expect(decisionBlock(one, analyst)).toMatch(/raw file of run 4,/);
+  });
+
+  it('refuses whoever submitted the results, even without uploading any', () => {
+    const submitter = { ...waiting, submittedBy: { id: analyst.id, name: 'Me' } };
+    expect(decisionBlock(submitter, analyst)).toMatch(/^You submitted these results, so a second person must check them/);
   });
 
   it('refuses other roles and decided submissions', () => {
@@ -80,6 +85,16 @@ describe('run choices', () => {
     expect(choices.map((choice) => choice.run.id)).toEqual(['r1', 'r2']);
     expect(choices[1].versions.map((v) => v.version)).toEqual([2, 1]);
     expect(defaultPicks(choices)).toEqual({ r1: 'e', r2: 'b' });
+  });
+
+  it('asks for at least one pick, and at least one data run among them', () => {
+    const choices = [
+      { run: { ...run('z', 1), kind: 'wind_off_zero' as const }, versions: [version('z1', 1, 'done')] },
+      { run: run('d', 2), versions: [version('d1', 1, 'done')] },
+    ];
+    expect(picksProblem(choices, { z: '', d: '' })).toBe('Choose a version of at least one run.');
+    expect(picksProblem(choices, { z: 'z1', d: '' })).toMatch(/at least one data run/);
+    expect(picksProblem(choices, { z: 'z1', d: 'd1' })).toBeNull();
   });
 
   it('sends one reduction per run and leaves out runs set aside', () => {

@@ -12,7 +12,7 @@ export interface Caller {
  * Why the caller may not approve or send back this submission, in plain words, or null when they may.
  * The server decides in the end; this only spares people a button that would be refused.
  */
-export function decisionBlock(submission: Pick<Submission, 'state' | 'reductions'>, caller: Caller): string | null {
+export function decisionBlock(submission: Pick<Submission, 'state' | 'reductions' | 'submittedBy'>, caller: Caller): string | null {
   if (submission.state !== 'awaiting_approval') {
     return 'This submission has already been decided.';
   }
@@ -27,6 +27,9 @@ export function decisionBlock(submission: Pick<Submission, 'state' | 'reductions
     const runs = [...new Set(own)].sort((a, b) => a - b);
     const list = runs.length === 1 ? `run ${runs[0]}` : `runs ${runs.slice(0, -1).join(', ')} and ${runs[runs.length - 1]}`;
     return `You uploaded the raw file of ${list}, so a second person must check it: another analyst with a signing right decides.`;
+  }
+  if (submission.submittedBy.id === caller.id) {
+    return 'You submitted these results, so a second person must check them: another analyst with a signing right decides.';
   }
   return null;
 }
@@ -72,6 +75,14 @@ export function runChoices(runs: readonly { run: RunChoice['run']; reductions: r
 /** The default pick: the newest done version of every run, keyed by run id. */
 export function defaultPicks(choices: readonly RunChoice[]): Record<string, string> {
   return Object.fromEntries(choices.map((choice) => [choice.run.id, choice.versions[0].id]));
+}
+
+/** Why the picks cannot be submitted, or null: something must be chosen, and calibration runs alone make no result. */
+export function picksProblem(choices: readonly RunChoice[], picks: Readonly<Record<string, string>>): string | null {
+  const chosen = choices.filter((choice) => (picks[choice.run.id] ?? '') !== '');
+  if (chosen.length === 0) return 'Choose a version of at least one run.';
+  if (!chosen.some((choice) => choice.run.kind === 'data')) return 'Choose at least one data run; calibration runs alone make no result.';
+  return null;
 }
 
 /** The reduction ids to send, one per run, leaving out runs set to `''` (left out of the submission). */

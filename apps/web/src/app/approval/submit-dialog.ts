@@ -16,7 +16,7 @@ import { IngestApi } from '../testing-runs/ingest-api';
 import { EmptyState } from '../shared/empty-state';
 import { ErrorBanner } from '../shared/error-banner';
 import { ApprovalApi } from './approval-api';
-import { defaultPicks, pickedReductionIds, runChoices, type RunChoice } from './approval-rules';
+import { defaultPicks, pickedReductionIds, picksProblem, runChoices, type RunChoice } from './approval-rules';
 
 /** Asks for approval of a test's results: one done reduction version per run (newest by default) and a note. */
 @Component({
@@ -54,8 +54,8 @@ import { defaultPicks, pickedReductionIds, runChoices, type RunChoice } from './
             <textarea matInput [formControl]="note" rows="3" maxlength="2000"></textarea>
             <mat-hint align="end">{{ note.value.length }} / 2000</mat-hint>
           </mat-form-field>
-          @if (nothingPicked()) {
-            <p class="error" role="alert">Choose a version of at least one run.</p>
+          @if (picksProblem(); as problem) {
+            <p class="error" role="alert">{{ problem }}</p>
           }
         }
       }
@@ -65,7 +65,7 @@ import { defaultPicks, pickedReductionIds, runChoices, type RunChoice } from './
     </mat-dialog-content>
     <mat-dialog-actions align="end">
       <button mat-button type="button" mat-dialog-close>Cancel</button>
-      <button mat-flat-button type="button" [disabled]="sending() || !choices.hasValue() || choices.value().length === 0 || nothingPicked()" (click)="submit()">
+      <button mat-flat-button type="button" [disabled]="sending() || !choices.hasValue() || choices.value().length === 0 || picksProblem() !== null" (click)="submit()">
         Submit for approval
       </button>
     </mat-dialog-actions>
@@ -94,7 +94,7 @@ export class SubmitDialog {
       ),
   });
   protected readonly picks = signal<Record<string, string>>({});
-  protected readonly nothingPicked = computed(() => this.choices.hasValue() && this.choices.value().length > 0 && pickedReductionIds(this.picks()).length === 0);
+  protected readonly picksProblem = computed(() => (this.choices.hasValue() && this.choices.value().length > 0 ? picksProblem(this.choices.value(), this.picks()) : null));
   protected readonly note = new FormControl('', { nonNullable: true, validators: Validators.maxLength(2000) });
   protected readonly sending = signal(false);
   protected readonly sendError = signal<string | null>(null);
@@ -114,7 +114,7 @@ export class SubmitDialog {
 
   protected submit(): void {
     const reductionIds = pickedReductionIds(this.picks());
-    if (reductionIds.length === 0 || this.note.invalid) return;
+    if (this.picksProblem() !== null || this.note.invalid) return;
     this.sending.set(true);
     this.sendError.set(null);
     this.api.submit(this.testId, reductionIds, this.note.value.trim()).subscribe({
