@@ -19,6 +19,11 @@ export const adminRoutes: Routes = [
     loadComponent: () => import('./services/services-page').then((m) => m.ServicesPage),
   },
   {
+    path: 'signing-rights',
+    title: 'Signing rights · Tunnelwright',
+    loadComponent: () => import('./signing-rights/signing-rights-page').then((m) => m.SigningRightsPage),
+  },
+  {
     path: 'audit',
     title: 'Audit log · Tunnelwright',
     loadComponent: () => import('./audit/audit-page').then((m) => m.AuditPage),

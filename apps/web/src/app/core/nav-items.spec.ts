@@ -19,8 +19,8 @@ describe('navItemsFor', () => {
     expect(labels('analyst', true)).toEqual(['Catalogue', 'Test planner', 'Tests']);
   });
 
-  it('shows a lab manager the administration sections and, in demo mode, the dev mailbox', () => {
-    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Users', 'Tunnels', 'Services', 'Booking rules', 'Audit log', 'Dev mailbox']);
+  it('shows a lab manager the administration sections, signing rights among them, and, in demo mode, the dev mailbox', () => {
+    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Booking rules', 'Audit log', 'Dev mailbox']);
   });
 
   it('hides the dev mailbox when demo mode is off', () => {

@@ -28,6 +28,7 @@ export const navItemsByRole: Readonly<Record<Role, readonly NavItem[]>> = {
     { label: 'Calendar', path: '/lab-calendar', icon: 'calendar_view_week' },
     tests,
     { label: 'Users', path: '/admin/users', icon: 'group' },
+    { label: 'Signing rights', path: '/admin/signing-rights', icon: 'draw' },
     { label: 'Tunnels', path: '/admin/tunnels', icon: 'air' },
     { label: 'Services', path: '/admin/services', icon: 'sell' },
     { label: 'Booking rules', path: '/booking-rules', icon: 'rule' },
