@@ -11,6 +11,7 @@ import { MatSelectHarness } from '@angular/material/select/testing';
 import { By } from '@angular/platform-browser';
 import { provideRouter } from '@angular/router';
 import type { PlanSummary } from '@tunnelwright/contracts';
+import { DateTime } from 'luxon';
 import { AttachmentPicker } from './attachment-picker';
 import { BookingRequestPage } from './booking-request-page';
 
@@ -58,6 +59,22 @@ async function chooseTunnel(loader: HarnessLoader, backend: HttpTestingControlle
   week.flush({ tunnelId, timeZone: 'Europe/London', from, to: from, slots: slots(from) });
   await choosing;
 }
+
+/** Moves the tunnel's week on by one and answers the occupancy request that starts, with nothing booked. */
+async function nextWeek(loader: HarnessLoader, backend: HttpTestingController): Promise<void> {
+  const moving = (await loader.getHarness(MatButtonHarness.with({ selector: '[aria-label="Next week"]' }))).click();
+  let pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
+  while (pending.length === 0) {
+    await new Promise((done) => setTimeout(done, 20));
+    pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
+  }
+  const from = pending[0]!.request.params.get('from') ?? '';
+  pending[0]!.flush({ tunnelId, timeZone: 'Europe/London', from, to: from, slots: [] });
+  await moving;
+}
+
+/** Next Monday at `time` as a `datetime-local` value in the lab's zone. */
+const nextMondayAt = (days: number, time: string) => `${DateTime.now().setZone('Europe/London').startOf('week').plus({ weeks: 1, days }).toFormat('yyyy-LL-dd')}T${time}`;
 
 const field = (loader: HarnessLoader, label: RegExp) => loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: label }));
 const input = async (loader: HarnessLoader, label: RegExp) => (await (await field(loader, label)).getControl(MatInputHarness)) as MatInputHarness;
@@ -188,5 +205,29 @@ describe('BookingRequestPage', () => {
     await (await loader.getHarness(MatButtonHarness.with({ text: 'Try again' }))).click();
     backend.expectOne(`/api/bookings/${bookingId}/attachments`);
     backend.expectNone('/api/bookings');
+  }, 20_000);
+
+  it('makes a free stretch chosen on the tunnel’s week the period, in lab wall time', async () => {
+    const { fixture, loader, backend } = await open();
+    await chooseTunnel(loader, backend);
+    await nextWeek(loader, backend);
+    const monday = (fixture.nativeElement as HTMLElement).querySelector<HTMLButtonElement>('tw-calendar-grid button.free-slot');
+    expect(monday?.textContent?.trim()).toBe('Free all day');
+    monday?.click();
+    await fixture.whenStable();
+    expect(await (await input(loader, /^Start/)).getValue()).toBe(nextMondayAt(0, '00:00'));
+    expect(await (await input(loader, /^End/)).getValue()).toBe(nextMondayAt(1, '00:00'));
+    expect((fixture.nativeElement as HTMLElement).querySelector('[data-testid="slot-note"]')?.textContent).toContain('Period set to Mon');
+  }, 20_000);
+
+  it('with a saved plan, takes the start from the chosen free stretch and the end from the plan’s hours', async () => {
+    const { fixture, loader, backend } = await open({ planId, plans: [savedPlan], planHours: 3 });
+    await chooseTunnel(loader, backend);
+    await nextWeek(loader, backend);
+    (fixture.nativeElement as HTMLElement).querySelectorAll<HTMLButtonElement>('tw-calendar-grid button.free-slot')[2]?.click();
+    await fixture.whenStable();
+    expect(await (await input(loader, /^Start/)).getValue()).toBe(nextMondayAt(2, '00:00'));
+    expect(await (await input(loader, /^End/)).getValue()).toBe(nextMondayAt(2, '03:00'));
+    expect((fixture.nativeElement as HTMLElement).querySelector('[data-testid="slot-note"]')?.textContent).toContain('the end follows the plan’s 3 h');
   }, 20_000);
 });

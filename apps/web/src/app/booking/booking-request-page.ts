@@ -19,8 +19,9 @@ import { PlannerApi } from '../planner/planner-api';
 import { AttachmentPicker } from './attachment-picker';
 import { AttachmentQueue } from './attachment-queue';
 import { BookingApi } from './booking-api';
+import type { FreeSlot } from './calendar-grid';
 import { articleForm, bookingRequestForm, bookingRequestOf } from './booking-request-form';
-import { localValueAfterHours, userTimeZone } from './lab-time';
+import { formatPeriod, localValueAfterHours, localValueOf, userTimeZone } from './lab-time';
 import { referenceAreaKindLabels } from './reference-area-kind-labels';
 import { TunnelOccupancyWeek } from './tunnel-occupancy-week';
 
@@ -96,6 +97,8 @@ export class BookingRequestPage implements OnInit {
     const error = this.tunnels.error() ?? this.settings.error() ?? this.services.error();
     return error ? problemMessage(error.cause ?? error, 'The tunnels and booking rules could not be loaded.') : null;
   });
+  /** What choosing a free stretch did to the period, announced to screen readers. */
+  protected readonly slotNote = signal('');
   protected readonly sending = signal(false);
   protected readonly sendError = signal<string | null>(null);
 
@@ -142,6 +145,20 @@ export class BookingRequestPage implements OnInit {
   ngOnInit(): void {
     const planId = this.planId();
     if (planId) this.form.controls.planId.setValue(planId);
+  }
+
+  /** Makes a free stretch chosen on the tunnel's week the period; with a saved plan, the end then follows the plan. */
+  protected useFreeSlot(slot: FreeSlot): void {
+    const zone = this.labZone();
+    if (!zone) return;
+    const { start, end } = this.form.controls;
+    start.setValue(localValueOf(slot.start, zone));
+    end.setValue(localValueOf(slot.end, zone));
+    start.markAsTouched();
+    end.markAsTouched();
+    const hours = this.planHours();
+    const chosen = formatPeriod(slot, zone, zone);
+    this.slotNote.set(hours === null ? `Period set to ${chosen}.` : `Start set from the free time ${chosen}; the end follows the plan’s ${hours} h.`);
   }
 
   protected planLabel(name: string, bookingId: string | null): string {

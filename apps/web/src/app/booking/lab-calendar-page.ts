@@ -17,11 +17,11 @@ import { ErrorBanner } from '../shared/error-banner';
 import { BookingApi } from './booking-api';
 import { bookingStateLabels } from './booking-state-labels';
 import { monthDays, weekDays } from './calendar-days';
-import { CalendarEntry, CalendarGrid } from './calendar-grid';
+import { CalendarEntry, CalendarGrid, type FreeSlot } from './calendar-grid';
 import { formatPeriod, userTimeZone } from './lab-time';
 import { MaintenanceBlockDialog, MaintenanceBlockDialogData } from './maintenance-block-dialog';
 
-/** Lab managers' calendar of every tunnel for a week or a month, in the lab's zone. */
+/** Lab managers' calendar of every tunnel for a week or a month, in the lab's zone; a free stretch opens a maintenance block for it. */
 @Component({
   selector: 'tw-lab-calendar-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -55,7 +55,8 @@ import { MaintenanceBlockDialog, MaintenanceBlockDialogData } from './maintenanc
             Your own zone is {{ viewerZone }}.
           }
         </p>
-        <tw-calendar-grid [days]="days()" [lanes]="lanes()" [entries]="entries()" [timeZone]="zone" />
+        <p class="zone">Choose a free stretch to block it for maintenance.</p>
+        <tw-calendar-grid [days]="days()" [lanes]="lanes()" [entries]="entries()" [timeZone]="zone" [chooseFree]="true" (freeChosen)="addMaintenance(zone, $event)" />
         <header class="maintenance-header">
           <h2>Maintenance blocks</h2>
           <button mat-stroked-button type="button" (click)="addMaintenance(zone)">Block a tunnel…</button>
@@ -147,8 +148,9 @@ export class LabCalendarPage {
     return formatPeriod(block.period, block.timeZone);
   }
 
-  protected addMaintenance(timeZone: string): void {
-    const data: MaintenanceBlockDialogData = { tunnels: this.lanes(), timeZone };
+  /** Opens the maintenance form, with the tunnel and period of a free stretch chosen on the calendar if there is one. */
+  protected addMaintenance(timeZone: string, slot?: FreeSlot): void {
+    const data: MaintenanceBlockDialogData = { tunnels: this.lanes(), timeZone, slot };
     this.dialog
       .open(MaintenanceBlockDialog, { data, width: '560px' })
       .afterClosed()

@@ -9,13 +9,15 @@ import type { MaintenanceBlock } from '@tunnelwright/contracts';
 import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { BookingApi } from './booking-api';
-import { CalendarLane } from './calendar-grid';
-import { labInstant } from './lab-time';
+import { CalendarLane, type FreeSlot } from './calendar-grid';
+import { labInstant, localValueOf } from './lab-time';
 
 /** What the maintenance dialog needs: the tunnels and the lab's zone. */
 export interface MaintenanceBlockDialogData {
   readonly tunnels: readonly CalendarLane[];
   readonly timeZone: string;
+  /** A free stretch chosen on the calendar, to start the form with. */
+  readonly slot?: FreeSlot;
 }
 
 /** A lab manager blocks a tunnel for maintenance; the API refuses a period that clashes with a booking. */
@@ -92,10 +94,11 @@ export class MaintenanceBlockDialog {
   private readonly dialogRef = inject<MatDialogRef<MaintenanceBlockDialog, MaintenanceBlock>>(MatDialogRef);
   protected readonly data = inject<MaintenanceBlockDialogData>(MAT_DIALOG_DATA);
 
+  private readonly slot = this.data.slot;
   protected readonly form = new FormGroup({
-    tunnelId: new FormControl<string | null>(null, Validators.required),
-    start: new FormControl('', { nonNullable: true, validators: Validators.required }),
-    end: new FormControl('', { nonNullable: true, validators: Validators.required }),
+    tunnelId: new FormControl<string | null>(this.slot?.laneId ?? null, Validators.required),
+    start: new FormControl(this.slot ? localValueOf(this.slot.start, this.data.timeZone) : '', { nonNullable: true, validators: Validators.required }),
+    end: new FormControl(this.slot ? localValueOf(this.slot.end, this.data.timeZone) : '', { nonNullable: true, validators: Validators.required }),
     reason: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(2000)] }),
   });
   protected readonly orderError = signal(false);

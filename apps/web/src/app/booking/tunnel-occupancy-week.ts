@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -9,9 +9,12 @@ import { ErrorBanner } from '../shared/error-banner';
 import { BookingApi } from './booking-api';
 import { bookingStateLabels } from './booking-state-labels';
 import { weekDays } from './calendar-days';
-import { CalendarEntry, CalendarGrid } from './calendar-grid';
+import { CalendarEntry, CalendarGrid, type FreeSlot } from './calendar-grid';
 
-/** One tunnel's week of free and busy time, for a customer choosing a period; others' bookings show only as busy. */
+/**
+ * One tunnel's week of free and busy time, for a customer choosing a period; others' bookings show only as busy.
+ * A free stretch still to come can be chosen to fill in the period.
+ */
 @Component({
   selector: 'tw-tunnel-occupancy-week',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -29,7 +32,8 @@ import { CalendarEntry, CalendarGrid } from './calendar-grid';
     @if (loadError(); as message) {
       <tw-error-banner [message]="message" (retry)="occupancy.reload()" />
     }
-    <tw-calendar-grid [days]="days()" [lanes]="lanes()" [entries]="entries()" [timeZone]="timeZone()" />
+    <p class="hint">Choose a free stretch to make it the period below.</p>
+    <tw-calendar-grid [days]="days()" [lanes]="lanes()" [entries]="entries()" [timeZone]="timeZone()" [chooseFree]="true" (freeChosen)="freeChosen.emit($event)" />
   `,
   styles: `
     .toolbar {
@@ -37,6 +41,10 @@ import { CalendarEntry, CalendarGrid } from './calendar-grid';
       align-items: center;
       gap: 8px;
       margin-bottom: 4px;
+    }
+    .hint {
+      color: var(--mat-sys-on-surface-variant);
+      margin: 0 0 4px;
     }
   `,
 })
@@ -47,6 +55,8 @@ export class TunnelOccupancyWeek {
   readonly tunnelName = input.required<string>();
   /** The lab's IANA zone. */
   readonly timeZone = input.required<string>();
+  /** Emitted with the free stretch the customer chose for the period. */
+  readonly freeChosen = output<FreeSlot>();
 
   protected readonly anchor = signal<DateTime>(DateTime.now());
   protected readonly days = computed(() => weekDays(this.anchor(), this.timeZone()));
