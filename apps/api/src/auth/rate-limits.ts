@@ -63,3 +63,14 @@ export function forgotPasswordRateLimits(redis: Redis, prefix: string): RequestH
     }),
   ];
 }
+
+/** Public sheet checks: 60 file checks per 15 minutes from one address, so the open upload cannot be used to load the server. */
+export function verifyCheckRateLimits(redis: Redis, prefix: string): RequestHandler[] {
+  return [
+    limiter(redis, `${prefix}verify-ip:`, {
+      limit: 60,
+      keyGenerator: clientIp,
+      message: 'Too many files checked from this address. Wait a few minutes and try again.',
+    }),
+  ];
+}

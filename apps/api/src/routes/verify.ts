@@ -1,6 +1,7 @@
 import type { Verification } from '@tunnelwright/contracts';
 import { ResultSheet } from '@tunnelwright/db';
 import express from 'express';
+import { verifyCheckRateLimits } from '../auth/rate-limits';
 import { HttpError } from '../errors/http-error';
 import { sha256Hex, verifyIssuedFile } from '../reports/issued-file-hash';
 import { sampleIssuedSheet } from './approval-samples';
@@ -42,7 +43,7 @@ export const verifyRoutes: RouteDef[] = [
     path: '/:reportNumber',
     access: 'public',
     summary: 'Check a PDF (raw body, application/pdf, up to 25 MB) against the issued sheet of that number, byte for byte',
-    middleware: () => [express.raw({ type: ['application/pdf', 'application/octet-stream'], limit: maxCheckBytes })],
+    middleware: (deps) => [...verifyCheckRateLimits(deps.redis, deps.rateLimitPrefix ?? 'tw:rl:'), express.raw({ type: ['application/pdf', 'application/octet-stream'], limit: maxCheckBytes })],
     sample: {
       params: async (f) => ({ reportNumber: (await sampleIssuedSheet(f)).reportNumber }),
       expect: 400,
