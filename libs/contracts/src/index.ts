@@ -10,3 +10,4 @@ export * from './ingest';
 export * from './planner';
 export * from './booking';
 export * from './approval';
+export * from './review';

@@ -16,6 +16,7 @@ import { planRoutes } from './plans';
 import { pointExclusionRoutes } from './point-exclusions';
 import { reductionRoutes } from './reductions';
 import { resultSheetRoutes } from './result-sheets';
+import { reviewRoutes } from './review';
 import type { Resource, RouteDef } from './route';
 import { runRoutes } from './runs';
 import { serviceRoutes } from './services';
@@ -56,6 +57,7 @@ export const resources: Resource[] = [
   { mount: '/api/signing-rights', routes: signingRightRoutes },
   { mount: '/api/result-sheets', routes: resultSheetRoutes },
   { mount: '/api/verify', routes: verifyRoutes },
+  { mount: '/api/review', routes: reviewRoutes },
   { mount: '/api/shapes', routes: shapeRoutes },
   { mount: '/api/plans', routes: planRoutes },
   { mount: '/api/bookings', routes: bookingRoutes },
