@@ -114,13 +114,16 @@ describe('review routes', () => {
     });
 
     it('shows an exclusion with its reason and who made it, the point still listed', async () => {
-      await PointExclusion.query(w.t.knex).insert({ reductionId: firstVersion, pointIndex: 2, reason: 'Turntable still settling at this yaw', excludedBy: w.analyst.id });
+      const exclude = await request(w.t.app).put(`/api/reductions/${firstVersion}/points/2/exclusion`).set(auth(w.analyst.token)).send({ reason: 'Turntable still settling at this yaw' });
+      expect(exclude.status, JSON.stringify(exclude.body)).toBe(200);
       const body = (await review(testId)).body as TestReview;
       const points = body.runs[0].selected?.points ?? [];
       expect(points).toHaveLength(6);
       expect(points[2].exclusion).toMatchObject({ reason: 'Turntable still settling at this yaw', excludedBy: { id: w.analyst.id, name: w.analyst.name } });
       expect(points.filter((p) => p.exclusion !== null)).toHaveLength(1);
-      await PointExclusion.query(w.t.knex).delete().where({ reductionId: firstVersion, pointIndex: 2 });
+      const restore = await request(w.t.app).delete(`/api/reductions/${firstVersion}/points/2/exclusion`).set(auth(w.analyst.token));
+      expect(restore.status).toBe(204);
+      expect(((await review(testId)).body as TestReview).runs[0].selected?.points[2].exclusion).toBeNull();
     });
 
     it('lists versions newest first, shows the newest by default and another on request; 400 for a version of another test', async () => {
