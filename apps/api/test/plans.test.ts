@@ -8,9 +8,13 @@ import {
   tunnelFit,
 } from '@tunnelwright/aero';
 import { PLANNER_DEFAULT_AIR } from '@tunnelwright/contracts';
-import { Balance } from '@tunnelwright/db';
+import type { ReductionResult } from '@tunnelwright/aero';
+import { Balance, Plan, User } from '@tunnelwright/db';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { issueSheet } from '../src/approval/workflow';
+import { exampleReduction, sampleSubmission } from '../src/routes/approval-samples';
+import { sampleTestId } from '../src/routes/ingest-samples';
 import { FixtureBuilder, type FixtureUser } from './support/fixtures';
 import { createTestApp, type TestApp } from './support/test-app';
 
@@ -211,21 +215,161 @@ describe('/api/plans', () => {
       expect(made.body.organisationId).toBe(customer.organisationId);
     });
 
-    it('customer linking certified results → 400; analyst → 200 with estimate vs measured', async () => {
+    it('a typed measured value on save → 400 on measured, for staff and customers alike', async () => {
       const created = await request(t.app).post('/api/plans').set('Authorization', auth(customer)).send({ name: 'Sign board', input: threePartInput() });
-      const link = { dragArea: 0.1, source: 'Certified results CR-0042' };
-      const refused = await request(t.app).put(`/api/plans/${created.body.id}`).set('Authorization', auth(customer)).send({ name: 'Sign board', input: threePartInput(), measured: link });
-      expect(refused.status).toBe(400);
-      expect(refused.body.errors[0].field).toBe('measured');
-      const linked = await request(t.app).put(`/api/plans/${created.body.id}`).set('Authorization', auth(analyst)).send({ name: 'Sign board', input: threePartInput(), measured: link });
-      expect(linked.status).toBe(200);
-      expect(linked.body.measured).toEqual(link);
-      const { estimatedDragArea, differencePercent, source } = linked.body.evaluation.measured;
-      expect(source).toBe(link.source);
-      close(differencePercent, ((estimatedDragArea - 0.1) / 0.1) * 100);
-      // A later customer save keeps the link.
-      const resaved = await request(t.app).put(`/api/plans/${created.body.id}`).set('Authorization', auth(customer)).send({ name: 'Sign board', input: threePartInput() });
-      expect(resaved.body).toMatchObject({ currentVersion: 3, measured: link });
+      for (const user of [customer, analyst]) {
+        const refused = await request(t.app)
+          .put(`/api/plans/${created.body.id}`)
+          .set('Authorization', auth(user))
+          .send({ name: 'Sign board', input: threePartInput(), measured: { dragArea: 0.1, source: 'typed' } });
+        expect(refused.status).toBe(400);
+        expect(refused.body.errors[0].field).toBe('measured');
+      }
+      const plan = await request(t.app).get(`/api/plans/${created.body.id}`).set('Authorization', auth(customer));
+      expect(plan.body).toMatchObject({ currentVersion: 1, measured: null });
+    });
+
+    it('a saved input carrying measuredDragArea shows no comparison: only a linked sheet does', async () => {
+      const created = await request(t.app).post('/api/plans').set('Authorization', auth(customer)).send({ name: 'Typed', input: { ...threePartInput(), measuredDragArea: 0.1 } });
+      expect(created.status).toBe(201);
+      expect(created.body.evaluation.measured).toBeNull();
+    });
+  });
+
+  describe('certified results', () => {
+    /** The engine's own result for the example yaw sweep every sample sheet reports as configuration A. */
+    let example: ReductionResult;
+    let valid: { sheetId: string; reportNumber: string };
+    let superseded: { sheetId: string; reportNumber: string };
+    let foreign: { sheetId: string; reportNumber: string };
+    let planId: string;
+
+    const link = (user: FixtureUser, id: string, body: object) => request(t.app).put(`/api/plans/${id}/certified-result`).set('Authorization', auth(user)).send(body);
+
+    beforeAll(async () => {
+      example = await exampleReduction();
+      const signer = await User.query(t.knex).findById(manager.id).throwIfNotFound();
+      // Revision 1 then 2 of one test of the customer: revision 1 is superseded.
+      const first = await sampleSubmission(fixtures, 'approved');
+      const r1 = await issueSheet(t.knex, first.submissionId, '', signer, 'http://localhost:3000');
+      const second = await sampleSubmission(fixtures, 'approved', first.testId);
+      const r2 = await issueSheet(t.knex, second.submissionId, 'Re-issued to test the link to the valid revision', signer, 'http://localhost:3000');
+      superseded = { sheetId: r1.sheet.id, reportNumber: r1.sheet.reportNumber };
+      valid = { sheetId: r2.sheet.id, reportNumber: r2.sheet.reportNumber };
+      // A sheet of another customer organisation.
+      const otherOrganisation: FixtureBuilder = Object.assign(Object.create(fixtures) as FixtureBuilder, { customerOrganisationId: async () => otherCustomer.organisationId });
+      const other = await sampleTestId(otherOrganisation);
+      const third = await sampleSubmission(fixtures, 'approved', other);
+      const r3 = await issueSheet(t.knex, third.submissionId, '', signer, 'http://localhost:3000');
+      foreign = { sheetId: r3.sheet.id, reportNumber: r3.sheet.reportNumber };
+      planId = (await request(t.app).post('/api/plans').set('Authorization', auth(customer)).send({ name: 'Estate car', input: threePartInput() })).body.id;
+    });
+
+    it('lists the valid sheets of the plan’s customer only, each configuration with the point nearest 0° yaw', async () => {
+      const response = await request(t.app).get(`/api/plans/${planId}/certified-candidates`).set('Authorization', auth(analyst));
+      expect(response.status).toBe(200);
+      expect(response.body.caution).toBe(PLANNER_CAUTION);
+      const numbers = response.body.items.map((c: { reportNumber: string }) => c.reportNumber);
+      expect(numbers).toContain(valid.reportNumber);
+      expect(numbers).not.toContain(superseded.reportNumber);
+      expect(numbers).not.toContain(foreign.reportNumber);
+      const candidate = response.body.items.find((c: { sheetId: string }) => c.sheetId === valid.sheetId);
+      expect(candidate.scale).toBe(4);
+      expect(candidate.configurations.map((c: { code: string }) => c.code)).toEqual(['A']);
+    });
+
+    it('links the drag area at the yaw nearest 0°, scaled to full size, with its U, source and audit row; the customer then sees the comparison', async () => {
+      const response = await link(analyst, planId, { sheetId: valid.sheetId, configurationCode: 'A' });
+      expect(response.status).toBe(200);
+      // Independent reading of the engine result: the point whose |yaw| is least; C_D·S with U(C_D·S) = S·U(C_D).
+      const nearest = example.points.reduce((best, p) => (Math.abs(p.yaw) < Math.abs(best.yaw) ? p : best));
+      const S = nearest.corrected.dragCoefficient.referenceArea;
+      const U = S * nearest.corrected.dragCoefficient.uncertainty!.expandedUncertainty;
+      // Definition (similar figures): full-scale area = model area × 4² for the 1:4 example article.
+      close(response.body.measured.dragArea, nearest.dragArea * 16);
+      close(response.body.measured.expandedUncertainty, U * 16);
+      expect(response.body.measured.certified).toMatchObject({
+        sheetId: valid.sheetId,
+        reportNumber: valid.reportNumber,
+        sheetState: 'valid',
+        configurationCode: 'A',
+        yaw: nearest.yaw,
+        scale: 4,
+        linkedBy: analyst.name,
+      });
+      close(response.body.measured.certified.sheetDragArea, nearest.dragArea);
+      expect(response.body.measured.source).toBe(`${valid.reportNumber}, configuration A (Baseline) at yaw ${nearest.yaw.toFixed(1)}°`);
+      const { estimatedDragArea, differencePercent } = response.body.evaluation.measured;
+      // Definition (relative difference): (estimate − measured) / measured × 100.
+      close(differencePercent, ((estimatedDragArea - nearest.dragArea * 16) / (nearest.dragArea * 16)) * 100);
+
+      const seen = await request(t.app).get(`/api/plans/${planId}`).set('Authorization', auth(customer));
+      expect(seen.body.caution).toBe(PLANNER_CAUTION);
+      expect(seen.body.evaluation.caution).toBe(PLANNER_CAUTION);
+      expect(seen.body.evaluation.measured.source).toBe(response.body.measured.source);
+      const listed = await request(t.app).get('/api/plans').set('Authorization', auth(customer));
+      expect(listed.body.items.find((p: { id: string }) => p.id === planId).measured.certified.reportNumber).toBe(valid.reportNumber);
+
+      const audit = await t.knex('audit_entries').where({ entity: 'plan', entityId: planId, action: 'plan.certified_result_linked' });
+      expect(audit).toHaveLength(1);
+      expect(audit[0].actorId).toBe(analyst.id);
+      expect(audit[0].after).toMatchObject({ sheetId: valid.sheetId, configurationCode: 'A' });
+
+      // A later save by the customer keeps the link.
+      const resaved = await request(t.app).put(`/api/plans/${planId}`).set('Authorization', auth(customer)).send({ name: 'Estate car', input: threePartInput() });
+      expect(resaved.body.measured.certified.sheetId).toBe(valid.sheetId);
+    });
+
+    it('refuses a superseded sheet, an unknown configuration and a bad body with field errors; another customer’s sheet → 404', async () => {
+      const stale = await link(manager, planId, { sheetId: superseded.sheetId, configurationCode: 'A' });
+      expect(stale.status).toBe(400);
+      expect(stale.body.errors).toEqual([{ field: 'sheetId', message: `${superseded.reportNumber} is superseded; link the valid revision instead` }]);
+      const missing = await link(manager, planId, { sheetId: valid.sheetId, configurationCode: 'Q' });
+      expect(missing.status).toBe(400);
+      expect(missing.body.errors[0].field).toBe('configurationCode');
+      const bad = await link(manager, planId, { sheetId: 'nope', configurationCode: '' });
+      expect(bad.status).toBe(400);
+      expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['configurationCode', 'sheetId']);
+      const other = await link(manager, planId, { sheetId: foreign.sheetId, configurationCode: 'A' });
+      expect(other.status).toBe(404);
+      const unknownPlan = await link(manager, '00000000-0000-4000-8000-000000000000', { sheetId: valid.sheetId, configurationCode: 'A' });
+      expect(unknownPlan.status).toBe(404);
+      // Nothing was half-written: the plan still carries the valid link.
+      const plan = await Plan.query(t.knex).findById(planId).throwIfNotFound();
+      expect(plan.measuredSheetId).toBe(valid.sheetId);
+    });
+
+    it('customers and technicians cannot link, unlink or list candidates', async () => {
+      for (const user of [customer, technician]) {
+        expect((await link(user, planId, { sheetId: valid.sheetId, configurationCode: 'A' })).status).toBe(403);
+        expect((await request(t.app).delete(`/api/plans/${planId}/certified-result`).set('Authorization', auth(user))).status).toBe(403);
+        expect((await request(t.app).get(`/api/plans/${planId}/certified-candidates`).set('Authorization', auth(user))).status).toBe(403);
+      }
+    });
+
+    it('unlinks with an audit row; the customer sees no comparison; a second unlink → 409', async () => {
+      const unlinked = await request(t.app).delete(`/api/plans/${planId}/certified-result`).set('Authorization', auth(manager));
+      expect(unlinked.status).toBe(204);
+      const seen = await request(t.app).get(`/api/plans/${planId}`).set('Authorization', auth(customer));
+      expect(seen.body.measured).toBeNull();
+      expect(seen.body.evaluation.measured).toBeNull();
+      const again = await request(t.app).delete(`/api/plans/${planId}/certified-result`).set('Authorization', auth(manager));
+      expect(again.status).toBe(409);
+      const audit = await t.knex('audit_entries').where({ entity: 'plan', entityId: planId, action: 'plan.certified_result_unlinked' });
+      expect(audit).toHaveLength(1);
+      expect(audit[0].before).toMatchObject({ sheetId: valid.sheetId });
+    });
+
+    it('a link to a sheet superseded later stays, marked superseded, until staff link the new revision', async () => {
+      const test = await sampleSubmission(fixtures, 'approved');
+      const signer = await User.query(t.knex).findById(manager.id).throwIfNotFound();
+      const old = await issueSheet(t.knex, test.submissionId, '', signer, 'http://localhost:3000');
+      const id = (await request(t.app).post('/api/plans').set('Authorization', auth(customer)).send({ name: 'Kept link', input: threePartInput() })).body.id;
+      expect((await link(analyst, id, { sheetId: old.sheet.id, configurationCode: 'A' })).status).toBe(200);
+      const next = await sampleSubmission(fixtures, 'approved', test.testId);
+      await issueSheet(t.knex, next.submissionId, 'Re-issued so the linked revision is superseded', signer, 'http://localhost:3000');
+      const seen = await request(t.app).get(`/api/plans/${id}`).set('Authorization', auth(analyst));
+      expect(seen.body.measured.certified).toMatchObject({ sheetId: old.sheet.id, sheetState: 'superseded' });
     });
   });
 

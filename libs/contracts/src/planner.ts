@@ -107,12 +107,73 @@ export type PlanInput = z.infer<typeof planInputSchema>;
 /** The input as a client writes it, before defaults are filled in. */
 export type PlanInputDraft = z.input<typeof planInputSchema>;
 
-/** Link from a plan to certified results: the measured drag area and where it comes from. */
-export const measuredLinkSchema = z.object({
-  dragArea: positive('Measured drag area'),
-  source: z.string().trim().min(1, { message: 'Say where the measured value comes from' }).max(300),
+/**
+ * Body of `PUT /api/plans/:id/certified-result`: the valid result sheet of the plan's customer and the configuration
+ * on it whose drag area at the yaw nearest 0° the estimate is compared with.
+ */
+export const certifiedResultLinkSchema = z.object({
+  sheetId: z.uuid({ message: 'Choose a result sheet' }),
+  configurationCode: z.string({ message: 'Choose a configuration' }).trim().min(1, { message: 'Choose a configuration' }).max(20),
 });
-export type MeasuredLink = z.infer<typeof measuredLinkSchema>;
+export type CertifiedResultLinkBody = z.infer<typeof certifiedResultLinkSchema>;
+
+/** Where a plan's measured value comes from: one point of one configuration on an issued result sheet. */
+export interface CertifiedResultSource {
+  sheetId: string;
+  reportNumber: string;
+  /** The sheet's state now; a superseded sheet keeps the link until staff link the newer revision. */
+  sheetState: 'valid' | 'superseded';
+  configurationCode: string;
+  configurationLabel: string;
+  /** Yaw of the point taken (the one nearest 0°), deg. */
+  yaw: number;
+  /** C_D·S and its expanded uncertainty U (k = 2) as printed on the sheet, model scale, m². */
+  sheetDragArea: number;
+  sheetExpandedUncertainty: number;
+  /** Full-scale to model length ratio of the sheet's article; full-scale C_D·A = C_D·S × scale². */
+  scale: number;
+  linkedBy: string;
+  linkedAt: string;
+}
+
+/**
+ * A plan's measured value: full-scale C_D·A in m² with its expanded uncertainty (k = 2), and where it comes from.
+ * `certified` is null only for values typed in before plans were linked to issued sheets.
+ */
+export interface MeasuredLink {
+  dragArea: number;
+  expandedUncertainty: number | null;
+  source: string;
+  certified: CertifiedResultSource | null;
+}
+
+/** A configuration of a result sheet a plan can be linked to, with the point the link would take. */
+export interface CertifiedCandidateConfiguration {
+  code: string;
+  label: string;
+  yaw: number;
+  sheetDragArea: number;
+  sheetExpandedUncertainty: number;
+  /** Full-scale C_D·A, m², and its U (k = 2). */
+  dragArea: number;
+  expandedUncertainty: number;
+}
+
+/** A valid result sheet of the plan's customer, as the staff link picker lists it. */
+export interface CertifiedCandidate {
+  sheetId: string;
+  reportNumber: string;
+  issueDate: string;
+  testTitle: string;
+  scale: number;
+  configurations: CertifiedCandidateConfiguration[];
+}
+
+/** Answer of `GET /api/plans/:id/certified-candidates`: valid sheets newest first, with the caution. */
+export interface CertifiedCandidateList {
+  items: CertifiedCandidate[];
+  caution: string;
+}
 
 /** Body of `POST /api/plans` and `PUT /api/plans/:id` (each save adds a version). */
 export const planSaveSchema = z.object({
@@ -120,8 +181,10 @@ export const planSaveSchema = z.object({
   input: planInputSchema,
   /** Customer organisation the plan belongs to: required from staff on create, ignored for customers. */
   organisationId: z.uuid({ message: 'Choose an organisation' }).optional(),
-  /** Certified results link; only analysts and lab managers may set or clear it. Omitted keeps it as it is. */
-  measured: measuredLinkSchema.nullable().optional(),
+  /** Measured values come only from an issued result sheet, through `PUT /api/plans/:id/certified-result`. */
+  measured: z
+    .never({ message: 'A measured value comes only from a certified result sheet: link one to the saved plan instead of typing it' })
+    .optional(),
   /** What changed in this version, shown in the history. */
   note: z.string().trim().max(300).default(''),
 });
@@ -260,7 +323,14 @@ export interface PlanEvaluation {
   powerSeries: { windSpeed: number; headwind: WindCase; tailwind: WindCase | null }[];
   duration: { hours: number; pointHours: number; changeHours: number; setupHours: number };
   /** Estimated versus measured C_D·A when a measured value is known. */
-  measured: { dragArea: number; source: string | null; estimatedDragArea: number; differencePercent: number } | null;
+  measured: {
+    dragArea: number;
+    /** U (k = 2) of the measured value, m²; null for a value without one. */
+    expandedUncertainty: number | null;
+    source: string | null;
+    estimatedDragArea: number;
+    differencePercent: number;
+  } | null;
 }
 
 /** An area rule of a library shape, without its evaluator. */

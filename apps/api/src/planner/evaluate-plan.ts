@@ -21,9 +21,10 @@ const SERIES_POINTS = 11;
 const degrees = (radians: number): number => (radians * 180) / Math.PI;
 const radians = (deg: number): number => (deg * Math.PI) / 180;
 
-/** Where the certified measured value comes from when a saved plan carries one. */
+/** A saved plan's measured value (full-scale C_D·A, m², with U at k = 2) and where it comes from. */
 export interface MeasuredValue {
   dragArea: number;
+  expandedUncertainty: number | null;
   source: string | null;
 }
 
@@ -101,7 +102,8 @@ function fullScaleCase(input: PlanInput, dragArea: number, prefix: string) {
  * Evaluates a plan: full-scale build-up at the ground speed in still air, fit against the chosen tunnel at scale λ
  * with the balance drag capacity from the request or a balance, full-scale power in the stated wind, a head- versus
  * tail-wind series, tunnel hours, and the comparison with a measured drag area when one is known.
- * `prefix` is prepended to field names in 400 answers (`input.` for saves).
+ * `prefix` is prepended to field names in 400 answers (`input.` for saves). A saved plan passes its own `measured`
+ * (null when nothing is linked), so a number typed into a stored input never stands in for a certified value.
  */
 export async function evaluatePlan(input: PlanInput, caller: Caller, options: { prefix?: string; measured?: MeasuredValue | null } = {}): Promise<PlanEvaluation> {
   const prefix = options.prefix ?? '';
@@ -137,7 +139,8 @@ export async function evaluatePlan(input: PlanInput, caller: Caller, options: { 
       windSpeeds: Array.from({ length: SERIES_POINTS }, (_, i) => i * step),
     });
     const duration = estimateDuration(input.duration);
-    const measuredValue = options.measured ?? (input.measuredDragArea === undefined ? null : { dragArea: input.measuredDragArea, source: null });
+    const typed = input.measuredDragArea === undefined ? null : { dragArea: input.measuredDragArea, expandedUncertainty: null, source: null };
+    const measuredValue = options.measured !== undefined ? options.measured : typed;
     const measured = measuredValue
       ? {
           ...measuredValue,

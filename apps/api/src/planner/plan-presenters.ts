@@ -1,9 +1,9 @@
 import { PLANNER_CAUTION, SHAPE_LIBRARY, type AreaRule, type ShapeEntry } from '@tunnelwright/aero';
-import type { PlanInput, PlanSummary, PlanVersion as PlanVersionDto, ShapeAreaRule, ShapeInfo, ShapeList } from '@tunnelwright/contracts';
+import type { MeasuredLink, PlanInput, PlanSummary, PlanVersion as PlanVersionDto, ShapeAreaRule, ShapeInfo, ShapeList } from '@tunnelwright/contracts';
 import type { Plan, PlanVersion } from '@tunnelwright/db';
 
-/** `plan.organisation` should be loaded for the organisation's name. */
-export function toPlanSummary(plan: Plan): PlanSummary {
+/** `plan.organisation` should be loaded for the organisation's name; `measured` comes from `measuredLinks`. */
+export function toPlanSummary(plan: Plan, measured: MeasuredLink | null): PlanSummary {
   return {
     id: plan.id,
     organisationId: plan.organisationId,
@@ -11,7 +11,7 @@ export function toPlanSummary(plan: Plan): PlanSummary {
     name: plan.name,
     currentVersion: plan.currentVersion,
     bookingId: plan.bookingId,
-    measured: plan.measuredDragArea === null ? null : { dragArea: plan.measuredDragArea, source: plan.measuredSource ?? '' },
+    measured,
     createdAt: plan.createdAt.toISOString(),
     updatedAt: plan.updatedAt.toISOString(),
   };

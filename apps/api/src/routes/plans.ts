@@ -1,9 +1,12 @@
 import { PLANNER_CAUTION } from '@tunnelwright/aero';
-import { planInputSchema, planSaveSchema, type PlanDetail, type PlanSave, type Role } from '@tunnelwright/contracts';
+import { certifiedResultLinkSchema, planInputSchema, planSaveSchema, type MeasuredLink, type PlanDetail, type PlanSave, type Role } from '@tunnelwright/contracts';
 import { isStaff, Organisation, Plan, PlanVersion, recordAudit, scopeToCaller, type User } from '@tunnelwright/db';
+import type { Knex } from 'knex';
 import { HttpError } from '../errors/http-error';
+import { certifiedCandidates, certifiedLinkColumns, measuredLinks, unlinkedColumns } from '../planner/certified-result';
 import { evaluatePlan } from '../planner/evaluate-plan';
 import { toPlanSummary, toPlanVersion } from '../planner/plan-presenters';
+import { sampleIssuedSheet } from './approval-samples';
 import { route, type RouteDef, type SampleFixtures } from './route';
 
 const planners: readonly Role[] = ['customer', 'analyst', 'lab_manager'];
@@ -33,10 +36,24 @@ async function samplePlanId(f: SampleFixtures): Promise<Record<string, string>> 
   return { id: plan.id };
 }
 
-function assertMayLinkResults(caller: User, body: PlanSave): void {
-  if (body.measured !== undefined && !resultLinkers.includes(caller.role)) {
-    throw HttpError.field('measured', 'Only an analyst or lab manager can link certified results to a plan');
-  }
+/** The matrix customer's plan, linked to configuration A of the matrix customer's issued sheet. */
+async function sampleLinkedPlanId(f: SampleFixtures): Promise<Record<string, string>> {
+  const [{ id }, { sheetId }, author] = await Promise.all([samplePlanId(f), sampleIssuedSheet(f), f.customerUser()]);
+  await Plan.transaction(async (trx) => {
+    const plan = await Plan.query(trx).findById(id).withGraphFetched('organisation').throwIfNotFound();
+    await Plan.query(trx).findById(id).patch(await certifiedLinkColumns(trx, plan, sheetId, 'A', author.id));
+  });
+  return { id };
+}
+
+/**
+ * What the caller may read of a plan's measured values: staff everything; a customer only a value taken from an
+ * issued sheet, so a number typed in before plans were linked to sheets never reaches them as a measurement.
+ */
+async function visibleMeasured(knex: Knex, caller: User, plans: readonly Plan[]): Promise<Map<string, MeasuredLink | null>> {
+  const links = await measuredLinks(knex, plans);
+  if (!isStaff(caller)) for (const [id, link] of links) if (link && !link.certified) links.set(id, null);
+  return links;
 }
 
 /** The plan's organisation: the caller's own for a customer; a customer organisation named in the body for staff. */
@@ -54,14 +71,15 @@ async function findPlan(caller: User, id: string): Promise<Plan> {
   return plan;
 }
 
-async function planDetail(caller: User, plan: Plan): Promise<PlanDetail> {
-  const latest = await PlanVersion.query().findOne({ planId: plan.id, version: plan.currentVersion });
+async function planDetail(knex: Knex, caller: User, plan: Plan): Promise<PlanDetail> {
+  const latest = await PlanVersion.query(knex).findOne({ planId: plan.id, version: plan.currentVersion });
   if (!latest) throw HttpError.notFound('The plan version');
   const version = toPlanVersion(latest);
-  const measured = plan.measuredDragArea === null ? null : { dragArea: plan.measuredDragArea, source: plan.measuredSource };
+  const link = (await visibleMeasured(knex, caller, [plan])).get(plan.id) ?? null;
+  const measured = link ? { dragArea: link.dragArea, expandedUncertainty: link.expandedUncertainty, source: link.source } : null;
   // A saved plan stays readable when its tunnel is later archived, so it is evaluated as staff would see it.
   const evaluation = await evaluatePlan(version.input, { ...caller, role: 'lab_manager' }, { prefix: 'input.', measured });
-  return { ...toPlanSummary(plan), latest: version, evaluation, caution: PLANNER_CAUTION };
+  return { ...toPlanSummary(plan, link), latest: version, evaluation, caution: PLANNER_CAUTION };
 }
 
 /**
@@ -86,9 +104,10 @@ export const planRoutes: RouteDef[] = [
     access: planners,
     summary: 'List plans, most recently saved first',
     sample: { expect: 200 },
-    handler: async ({ caller, res }) => {
+    handler: async ({ caller, res, deps }) => {
       const plans = await scopeToCaller(Plan.query(), caller).withGraphFetched('organisation').orderBy('updatedAt', 'desc').limit(500);
-      res.json({ items: plans.map(toPlanSummary), caution: PLANNER_CAUTION });
+      const measured = await visibleMeasured(deps.knex, caller, plans);
+      res.json({ items: plans.map((plan) => toPlanSummary(plan, measured.get(plan.id) ?? null)), caution: PLANNER_CAUTION });
     },
   }),
   route({
@@ -99,7 +118,6 @@ export const planRoutes: RouteDef[] = [
     body: planSaveSchema,
     sample: { body: sampleSave, expect: 201 },
     handler: async ({ caller, body, res, deps }) => {
-      assertMayLinkResults(caller, body);
       const organisationId = await owningOrganisation(caller, body);
       await evaluatePlan(body.input, caller, { prefix: 'input.' });
       const planId = await deps.knex.transaction(async (trx) => {
@@ -108,14 +126,12 @@ export const planRoutes: RouteDef[] = [
           name: body.name,
           currentVersion: 1,
           createdBy: caller.id,
-          measuredDragArea: body.measured?.dragArea ?? null,
-          measuredSource: body.measured?.source ?? null,
         });
         await PlanVersion.query(trx).insert({ planId: plan.id, version: 1, input: body.input, note: body.note, createdBy: caller.id });
         await recordAudit(trx, { actorId: caller.id, action: 'plan.created', entity: 'plan', entityId: plan.id, after: { name: body.name, version: 1 } });
         return plan.id;
       });
-      res.status(201).json(await planDetail(caller, await findPlan(caller, planId)));
+      res.status(201).json(await planDetail(deps.knex, caller, await findPlan(caller, planId)));
     },
   }),
   route({
@@ -124,8 +140,8 @@ export const planRoutes: RouteDef[] = [
     access: planners,
     summary: 'One plan with its latest version and that version evaluated',
     sample: { params: samplePlanId, expect: 200, crossOrganisation: true },
-    handler: async ({ caller, params, res }) => {
-      res.json(await planDetail(caller, await findPlan(caller, params.id ?? '')));
+    handler: async ({ caller, params, res, deps }) => {
+      res.json(await planDetail(deps.knex, caller, await findPlan(caller, params.id ?? '')));
     },
   }),
   route({
@@ -136,19 +152,14 @@ export const planRoutes: RouteDef[] = [
     body: planSaveSchema,
     sample: { params: samplePlanId, body: sampleSave, expect: 200, crossOrganisation: true },
     handler: async ({ caller, params, body, res, deps }) => {
-      assertMayLinkResults(caller, body);
       const existing = await findPlan(caller, params.id ?? '');
       await evaluatePlan(body.input, caller, { prefix: 'input.' });
       await deps.knex.transaction(async (trx) => {
         const plan = await Plan.query(trx).findById(existing.id).forUpdate();
         if (!plan) throw HttpError.notFound('The plan');
         const version = plan.currentVersion + 1;
-        const measured =
-          body.measured === undefined
-            ? {}
-            : { measuredDragArea: body.measured?.dragArea ?? null, measuredSource: body.measured?.source ?? null };
         await PlanVersion.query(trx).insert({ planId: plan.id, version, input: body.input, note: body.note, createdBy: caller.id });
-        await Plan.query(trx).patchAndFetchById(plan.id, { name: body.name, currentVersion: version, ...measured });
+        await Plan.query(trx).patchAndFetchById(plan.id, { name: body.name, currentVersion: version });
         await recordAudit(trx, {
           actorId: caller.id,
           action: 'plan.versioned',
@@ -158,7 +169,7 @@ export const planRoutes: RouteDef[] = [
           after: { name: body.name, version },
         });
       });
-      res.json(await planDetail(caller, await findPlan(caller, existing.id)));
+      res.json(await planDetail(deps.knex, caller, await findPlan(caller, existing.id)));
     },
   }),
   route({
@@ -171,6 +182,68 @@ export const planRoutes: RouteDef[] = [
       const plan = await findPlan(caller, params.id ?? '');
       const versions = await PlanVersion.query().where({ planId: plan.id }).orderBy('version', 'desc');
       res.json({ items: versions.map(toPlanVersion), caution: PLANNER_CAUTION });
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/:id/certified-candidates',
+    access: resultLinkers,
+    summary: "Valid result sheets of the plan's customer, each configuration with the drag area at the yaw nearest 0° a link would take",
+    sample: { params: samplePlanId, expect: 200 },
+    handler: async ({ caller, params, res, deps }) => {
+      const plan = await findPlan(caller, params.id ?? '');
+      res.json({ items: await certifiedCandidates(deps.knex, plan.organisationId), caution: PLANNER_CAUTION });
+    },
+  }),
+  route({
+    method: 'put',
+    path: '/:id/certified-result',
+    access: resultLinkers,
+    summary: "Link the plan to a configuration of a valid result sheet of its customer: the measured C_D·S (with U, k = 2) at the yaw nearest 0°, scaled to full size",
+    body: certifiedResultLinkSchema,
+    sample: { params: samplePlanId, body: async (f) => ({ sheetId: (await sampleIssuedSheet(f)).sheetId, configurationCode: 'A' }), expect: 200 },
+    handler: async ({ caller, params, body, res, deps }) => {
+      const existing = await findPlan(caller, params.id ?? '');
+      await deps.knex.transaction(async (trx) => {
+        const plan = await Plan.query(trx).findById(existing.id).forUpdate();
+        if (!plan) throw HttpError.notFound('The plan');
+        plan.organisation = existing.organisation;
+        const columns = await certifiedLinkColumns(trx, plan, body.sheetId, body.configurationCode, caller.id);
+        await Plan.query(trx).findById(plan.id).patch(columns);
+        await recordAudit(trx, {
+          actorId: caller.id,
+          action: 'plan.certified_result_linked',
+          entity: 'plan',
+          entityId: plan.id,
+          before: plan.measuredDragArea === null ? null : { sheetId: plan.measuredSheetId, source: plan.measuredSource, dragArea: plan.measuredDragArea },
+          after: { sheetId: columns.measuredSheetId, configurationCode: columns.measuredConfigurationCode, yaw: columns.measuredYaw, source: columns.measuredSource, dragArea: columns.measuredDragArea },
+        });
+      });
+      res.json(await planDetail(deps.knex, caller, await findPlan(caller, existing.id)));
+    },
+  }),
+  route({
+    method: 'delete',
+    path: '/:id/certified-result',
+    access: resultLinkers,
+    summary: 'Unlink the measured value from the plan; the estimate stands alone again',
+    sample: { params: sampleLinkedPlanId, expect: 204 },
+    handler: async ({ caller, params, res, deps }) => {
+      const existing = await findPlan(caller, params.id ?? '');
+      await deps.knex.transaction(async (trx) => {
+        const plan = await Plan.query(trx).findById(existing.id).forUpdate();
+        if (!plan) throw HttpError.notFound('The plan');
+        if (plan.measuredDragArea === null) throw new HttpError(409, 'Nothing to unlink', 'The plan has no measured value linked.');
+        await Plan.query(trx).findById(plan.id).patch(unlinkedColumns);
+        await recordAudit(trx, {
+          actorId: caller.id,
+          action: 'plan.certified_result_unlinked',
+          entity: 'plan',
+          entityId: plan.id,
+          before: { sheetId: plan.measuredSheetId, source: plan.measuredSource, dragArea: plan.measuredDragArea },
+        });
+      });
+      res.status(204).end();
     },
   }),
 ];

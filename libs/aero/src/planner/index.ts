@@ -15,3 +15,4 @@ export * from './mach-check';
 export * from './tunnel-fit';
 export * from './full-scale-power';
 export * from './head-tail-power-series';
+export * from './scale-drag-area';

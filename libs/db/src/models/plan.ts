@@ -5,8 +5,9 @@ import { PlanVersion } from './plan-version';
 
 /**
  * A test plan of a customer organisation. Its inputs live in versions; `currentVersion` is the newest.
- * `bookingId` links a booking once bookings take plans; `measuredDragArea` (m²) with `measuredSource` links
- * certified results to compare the estimate with.
+ * `bookingId` links a booking once bookings take plans; `measuredDragArea` (full-scale C_D·A, m²) with
+ * `measuredSource` is the measured value the estimate is compared with, taken from the issued result sheet
+ * `measuredSheetId` (one point of one configuration; null only for values typed in before sheets existed).
  */
 export class Plan extends BaseModel {
   static override tableName = 'plans';
@@ -17,6 +18,16 @@ export class Plan extends BaseModel {
   bookingId!: string | null;
   measuredDragArea!: number | null;
   measuredSource!: string | null;
+  measuredSheetId!: string | null;
+  measuredConfigurationCode!: string | null;
+  measuredConfigurationLabel!: string | null;
+  measuredYaw!: number | null;
+  measuredSheetDragArea!: number | null;
+  measuredSheetUncertainty!: number | null;
+  measuredScale!: number | null;
+  measuredExpandedUncertainty!: number | null;
+  measuredLinkedBy!: string | null;
+  measuredLinkedAt!: Date | null;
   createdBy!: string;
 
   organisation?: Organisation;
