@@ -162,6 +162,67 @@ describe('booking tunnel time', () => {
     const download = managerPage.waitForEvent('download');
     await managerCard.getByRole('button', { name: 'Download side-view.png' }).click();
     expect((await download).suggestedFilename()).toBe('side-view.png');
+
+    // Later, the customer adds a photo to the same booking from its card, and it stays after a reload.
+    const laterPage = await browser.freshPage();
+    await signIn(laterPage, api.baseUrl, customer.email);
+    await openSection(laterPage, 'My bookings', 'My bookings');
+    const laterCard = laterPage.locator('tw-booking-summary').filter({ hasText: article });
+    await laterCard.getByRole('button', { name: 'Add drawings or photos' }).click();
+    await laterCard.getByLabel('Choose drawings or photos').setInputFiles([{ name: 'rig-photo.png', mimeType: 'image/png', buffer: drawing }]);
+    await laterCard.getByRole('status').getByText('Attached rig-photo.png.').waitFor();
+    await laterCard.getByRole('button', { name: 'Download rig-photo.png' }).waitFor();
+    await laterPage.screenshot({ path: `${shots}/booking-add-attachment.png` });
+    await laterPage.reload();
+    await laterPage.getByRole('heading', { name: 'My bookings', level: 1 }).waitFor();
+    const reloadedCard = laterPage.locator('tw-booking-summary').filter({ hasText: article });
+    await reloadedCard.getByRole('button', { name: 'Download side-view.png' }).waitFor();
+    await reloadedCard.getByRole('button', { name: 'Download rig-photo.png' }).waitFor();
+  });
+
+  it('a lab manager presses Enter on a free stretch of next week and the maintenance form opens with that tunnel and period', async () => {
+    const page = await browser.freshPage();
+    await signIn(page, api.baseUrl, userOf('lab_manager').email);
+    await openSection(page, 'Calendar', 'Calendar');
+    await page.getByRole('table', { name: 'Calendar by tunnel' }).waitFor();
+    await page.getByRole('button', { name: 'Later' }).click();
+    // The demo lab keeps Europe/London time; the calendar's days are cut in it.
+    const wednesday = DateTime.now().setZone('Europe/London').startOf('week').plus({ weeks: 1, days: 2 });
+    const free = page.getByRole('button', { name: new RegExp(`^Use Tunnel 2 — open jet, ${wednesday.toFormat('ccc d LLL')}, .+ for the period$`) }).first();
+    await free.focus();
+    await page.screenshot({ path: `${shots}/lab-calendar-free-stretch.png` });
+    await page.keyboard.press('Enter');
+    const dialog = page.getByRole('dialog');
+    await dialog.getByRole('heading', { name: 'Block a tunnel for maintenance' }).waitFor();
+    await dialog.getByRole('combobox', { name: 'Tunnel' }).getByText('Tunnel 2 — open jet').waitFor();
+    expect(await dialog.getByLabel('Start', { exact: true }).inputValue()).toMatch(new RegExp(`^${wednesday.toFormat('yyyy-LL-dd')}T\\d{2}:\\d{2}$`));
+    expect((await dialog.getByLabel('End', { exact: true }).inputValue()) > (await dialog.getByLabel('Start', { exact: true }).inputValue())).toBe(true);
+    await dialog.getByRole('button', { name: 'Close' }).click();
+    await dialog.waitFor({ state: 'detached' });
+  });
+
+  it('a lab manager changes the hold length on the booking rules screen after confirming, then puts it back', async () => {
+    const page = await browser.freshPage();
+    await signIn(page, api.baseUrl, userOf('lab_manager').email);
+    await openSection(page, 'Booking rules', 'Booking rules');
+    const hold = page.getByLabel('Hold length (hours)');
+    const original = await hold.inputValue();
+    await hold.fill('0');
+    await page.getByRole('button', { name: 'Save rules' }).click();
+    await page.getByText('Between 1 and 1440 hours').waitFor();
+    await hold.fill('36');
+    await page.getByRole('button', { name: 'Save rules' }).click();
+    await page.getByRole('dialog').getByText(`A provisional hold will last 36 hours instead of ${original} hours`).waitFor();
+    await page.screenshot({ path: `${shots}/booking-rules-confirm.png` });
+    await page.getByRole('dialog').getByRole('button', { name: 'Save rules' }).click();
+    await page.getByText('Booking rules saved.').waitFor();
+    await page.reload();
+    await page.getByRole('heading', { name: 'Booking rules', level: 1 }).waitFor();
+    await expect.poll(() => page.getByLabel('Hold length (hours)').inputValue()).toBe('36');
+    await page.getByLabel('Hold length (hours)').fill(original);
+    await page.getByRole('button', { name: 'Save rules' }).click();
+    await page.getByRole('dialog').getByRole('button', { name: 'Save rules' }).click();
+    await page.getByText('Booking rules saved.').waitFor();
   });
 
   it('a lab manager blocks a tunnel for maintenance on the calendar after the form explains what is missing, then removes it after confirming', async () => {
