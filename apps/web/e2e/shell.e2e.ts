@@ -9,10 +9,10 @@ import { navLabels, signIn } from './support/sign-in';
 
 const shots = '/tmp/tw-shots';
 const expectedNav: Record<Role, string[]> = {
-  customer: ['Catalogue', 'Test planner', 'My bookings', 'Tests'],
-  technician: ['Catalogue', 'My tunnel time', 'Tests'],
-  analyst: ['Catalogue', 'Test planner', 'Tests'],
-  lab_manager: ['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Users', 'Tunnels', 'Services', 'Audit log', 'Dev mailbox'],
+  customer: ['Catalogue', 'Test planner', 'My bookings', 'Tests', 'Documents'],
+  technician: ['Catalogue', 'My tunnel time', 'Tests', 'Documents'],
+  analyst: ['Catalogue', 'Test planner', 'Tests', 'Documents'],
+  lab_manager: ['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Booking rules', 'Audit log', 'Dev mailbox'],
 };
 
 function demoUser(role: Role) {

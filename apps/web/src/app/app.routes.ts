@@ -50,6 +50,16 @@ export const routes: Routes = [
         loadChildren: () => import('./testing-runs/testing-runs.routes').then((m) => m.testingRunsRoutes),
       },
       {
+        path: 'documents',
+        title: 'Documents · Tunnelwright',
+        loadComponent: () => import('./documents/documents-page').then((m) => m.DocumentsPage),
+      },
+      {
+        path: 'documents/:id',
+        title: 'Result sheet · Tunnelwright',
+        loadComponent: () => import('./documents/document-page').then((m) => m.DocumentPage),
+      },
+      {
         path: 'profile',
         title: 'Your profile · Tunnelwright',
         loadComponent: () => import('./profile/profile-page').then((m) => m.ProfilePage),

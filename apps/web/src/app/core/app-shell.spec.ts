@@ -38,7 +38,7 @@ async function renderAs(role: Role, demoMode: boolean) {
 describe('AppShell', () => {
   it('lists the catalogue, the test planner, the bookings and the tests for a customer, and asks nothing about demo mode', async () => {
     const { labels, host } = await renderAs('customer', true);
-    expect(labels).toEqual(['Catalogue', 'Test planner', 'My bookings', 'Tests']);
+    expect(labels).toEqual(['Catalogue', 'Test planner', 'My bookings', 'Tests', 'Documents']);
     expect(host.textContent).toContain('Mara Quist');
     expect(host.textContent).toContain('Customer');
     TestBed.inject(HttpTestingController).expectNone('/api/health');
@@ -46,7 +46,7 @@ describe('AppShell', () => {
 
   it('lists the administration sections and the dev mailbox for a lab manager in demo mode', async () => {
     const { labels } = await renderAs('lab_manager', true);
-    expect(labels).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Booking rules', 'Audit log', 'Dev mailbox']);
+    expect(labels).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Booking rules', 'Audit log', 'Dev mailbox']);
   });
 
   it('leaves the dev mailbox out when demo mode is off', async () => {

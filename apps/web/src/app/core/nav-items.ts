@@ -15,18 +15,20 @@ const planner: NavItem = { label: 'Test planner', path: '/planner', icon: 'archi
 const tests: NavItem = { label: 'Tests', path: '/tests', icon: 'science' };
 const myBookings: NavItem = { label: 'My bookings', path: '/bookings', icon: 'event_available' };
 const myWeek: NavItem = { label: 'My tunnel time', path: '/my-week', icon: 'today' };
+const documents: NavItem = { label: 'Documents', path: '/documents', icon: 'description' };
 
 /** Which sections each role may open, in the order they are listed. */
 export const navItemsByRole: Readonly<Record<Role, readonly NavItem[]>> = {
-  customer: [catalogue, planner, myBookings, tests],
-  technician: [catalogue, myWeek, tests],
-  analyst: [catalogue, planner, tests],
+  customer: [catalogue, planner, myBookings, tests, documents],
+  technician: [catalogue, myWeek, tests, documents],
+  analyst: [catalogue, planner, tests, documents],
   lab_manager: [
     catalogue,
     planner,
     { label: 'Bookings', path: '/lab-bookings', icon: 'event_note' },
     { label: 'Calendar', path: '/lab-calendar', icon: 'calendar_view_week' },
     tests,
+    documents,
     { label: 'Users', path: '/admin/users', icon: 'group' },
     { label: 'Signing rights', path: '/admin/signing-rights', icon: 'draw' },
     { label: 'Tunnels', path: '/admin/tunnels', icon: 'air' },
