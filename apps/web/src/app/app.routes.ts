@@ -28,6 +28,17 @@ export const routes: Routes = [
     loadComponent: () => import('./auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),
   },
   {
+    // Public: whoever holds a sheet checks it here, signed in or not (the QR code on each page links here).
+    path: 'verify',
+    title: 'Check a result sheet · Tunnelwright',
+    loadComponent: () => import('./verify/verify-page').then((m) => m.VerifyPage),
+  },
+  {
+    path: 'verify/:reportNumber',
+    title: 'Check a result sheet · Tunnelwright',
+    loadComponent: () => import('./verify/verify-page').then((m) => m.VerifyPage),
+  },
+  {
     path: '',
     canActivate: [signedInGuard],
     loadComponent: () => import('./core/app-shell').then((m) => m.AppShell),
