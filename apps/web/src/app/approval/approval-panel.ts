@@ -7,7 +7,7 @@ import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import type { ResultSheet, Submission } from '@tunnelwright/contracts';
+import type { ResultSheet, RunKind, Submission } from '@tunnelwright/contracts';
 import { of } from 'rxjs';
 import { AuthService } from '../core/auth-service';
 import { problemMessage } from '../core/problem-message';
@@ -21,6 +21,7 @@ import { DecisionDialog, type DecisionDialogData } from './decision-dialog';
 import { IssueDialog, type IssueDialogData } from './issue-dialog';
 import { SheetList } from './sheet-list';
 import { SubmitDialog } from './submit-dialog';
+import { resourceCause } from './resource-error';
 
 /**
  * A test's way to a certified sheet, for laboratory staff: submissions for approval with who decided what and why,
@@ -121,8 +122,11 @@ export class ApprovalPanel {
   protected readonly awaiting = computed(() => (this.submissions.hasValue() ? this.submissions.value() : []).some((s) => s.state === 'awaiting_approval'));
   protected readonly validSheet = computed(() => (this.sheets.hasValue() ? this.sheets.value() : []).find((sheet) => sheet.state === 'valid') ?? null);
   protected readonly caution = computed(() => (this.sheets.hasValue() ? (this.sheets.value()[0]?.caution ?? '') : ''));
-  protected readonly kindLabels: Readonly<Record<string, string>> = runKindLabels;
   protected readonly stateText = submissionStateText;
+
+  protected kindLabel(kind: string): string {
+    return runKindLabels[kind as RunKind] ?? kind;
+  }
 
   protected decisionBlock(submission: Submission): string | null {
     const caller = this.caller();
@@ -138,7 +142,7 @@ export class ApprovalPanel {
   protected readonly rightsKnown = computed(() => this.signingRight.hasValue());
 
   protected message(error: unknown, what: string): string {
-    return problemMessage(error, `The ${what} could not be loaded.`);
+    return problemMessage(resourceCause(error), `The ${what} could not be loaded.`);
   }
 
   protected submit(): void {

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
-import type { ResultSheet } from '@tunnelwright/contracts';
+import type { ResultSheet, ResultSheetState } from '@tunnelwright/contracts';
 import { issueDateText, sheetStateLabels } from './approval-labels';
 import { SheetDownloads } from './sheet-downloads';
 
@@ -34,7 +34,7 @@ import { SheetDownloads } from './sheet-downloads';
       <ng-container matColumnDef="state">
         <th mat-header-cell *matHeaderCellDef>State</th>
         <td mat-cell *matCellDef="let sheet">
-          <span class="state" [attr.data-state]="sheet.state">{{ stateLabels[sheet.state] }}</span>
+          <span class="state" [attr.data-state]="sheet.state">{{ stateLabel(sheet.state) }}</span>
           @if (sheet.supersededBy; as successor) {
             by <a [routerLink]="['/documents', successor.id]">{{ successor.reportNumber }}</a>
           }
@@ -81,6 +81,8 @@ export class SheetList {
     'downloads',
     'verify',
   ]);
-  protected readonly stateLabels = sheetStateLabels;
+  protected stateLabel(state: ResultSheetState): string {
+    return sheetStateLabels[state];
+  }
   protected readonly dateText = issueDateText;
 }

@@ -17,6 +17,7 @@ import { EmptyState } from '../shared/empty-state';
 import { ErrorBanner } from '../shared/error-banner';
 import { ApprovalApi } from './approval-api';
 import { defaultPicks, pickedReductionIds, picksProblem, runChoices, type RunChoice } from './approval-rules';
+import { resourceCause } from './resource-error';
 
 /** Asks for approval of a test's results: one done reduction version per run (newest by default) and a note. */
 @Component({
@@ -109,7 +110,7 @@ export class SubmitDialog {
   }
 
   protected message(error: unknown): string {
-    return problemMessage(error, 'The runs and their reductions could not be loaded.');
+    return problemMessage(resourceCause(error), 'The runs and their reductions could not be loaded.');
   }
 
   protected submit(): void {
@@ -121,7 +122,7 @@ export class SubmitDialog {
       next: (submission) => this.dialogRef.close(submission),
       error: (error: unknown) => {
         this.sending.set(false);
-        this.sendError.set(problemMessage(error, 'The submission could not be sent.'));
+        this.sendError.set(problemMessage(resourceCause(error), 'The submission could not be sent.'));
       },
     });
   }

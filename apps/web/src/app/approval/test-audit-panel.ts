@@ -11,6 +11,7 @@ import { EmptyState } from '../shared/empty-state';
 import { ErrorBanner } from '../shared/error-banner';
 import { ApprovalApi } from './approval-api';
 import { auditWording } from './audit-wording';
+import { resourceCause } from './resource-error';
 
 /** For lab managers: who submitted, decided, left points out and issued sheets on one test, newest first. */
 @Component({
@@ -130,7 +131,7 @@ export class TestAuditPanel {
   }
 
   protected message(error: unknown): string {
-    return problemMessage(error, 'The audit trail could not be loaded.');
+    return problemMessage(resourceCause(error), 'The audit trail could not be loaded.');
   }
 
   protected turnPage(event: PageEvent): void {

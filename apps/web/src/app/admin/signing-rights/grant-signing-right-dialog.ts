@@ -13,6 +13,7 @@ import { ApprovalApi } from '../../approval/approval-api';
 import { problemFieldErrors, problemMessage } from '../../core/problem-message';
 import { ErrorBanner } from '../../shared/error-banner';
 import { UsersApi } from '../users/users-api';
+import { resourceCause } from '../../approval/resource-error';
 
 /** Active analysts and lab managers who do not hold a signing right now, by name. */
 export function grantCandidates(people: readonly UserSummary[], holderIds: ReadonlySet<string>): UserSummary[] {
@@ -86,7 +87,7 @@ export class GrantSigningRightDialog {
   protected readonly sendError = signal<string | null>(null);
 
   protected loadMessage(error: unknown): string {
-    return problemMessage(error, 'The analysts and lab managers could not be loaded.');
+    return problemMessage(resourceCause(error), 'The analysts and lab managers could not be loaded.');
   }
 
   protected grant(): void {
@@ -105,7 +106,7 @@ export class GrantSigningRightDialog {
           this.userId.setErrors({ server: field.message });
           this.userId.markAsTouched();
         }
-        this.sendError.set(problemMessage(error, 'The signing right could not be granted.'));
+        this.sendError.set(problemMessage(resourceCause(error), 'The signing right could not be granted.'));
       },
     });
   }
