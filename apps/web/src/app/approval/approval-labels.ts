@@ -1,4 +1,4 @@
-import type { CustomerTestStage, ResultSheetState, Submission, SubmissionState } from '@tunnelwright/contracts';
+import type { CustomerTestStage, ResultSheetState, Submission, SubmissionState, TestProgress } from '@tunnelwright/contracts';
 
 /** Plain words for each submission state. */
 export const submissionStateLabels: Readonly<Record<SubmissionState, string>> = {
@@ -38,4 +38,25 @@ export function issueDateText(issueDate: string): string {
   if (!match) return issueDate;
   const day = new Date(Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3])));
   return new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' }).format(day);
+}
+
+/** Where a test stands, in the words its reader needs: the customer's stage, or for staff the approval state. */
+export function progressText(progress: TestProgress | undefined, forCustomer: boolean): string {
+  if (!progress) return '';
+  if (forCustomer) {
+    const stage = customerStageLabels[progress.customerStage];
+    return progress.customerStage === 'certified' && progress.approval.reportNumber ? `${stage}: ${progress.approval.reportNumber}` : stage;
+  }
+  switch (progress.approval.state) {
+    case 'none':
+      return 'Not submitted for approval';
+    case 'awaiting_approval':
+      return 'Waiting for approval';
+    case 'sent_back':
+      return 'Sent back';
+    case 'approved':
+      return 'Approved, sheet not issued yet';
+    case 'issued':
+      return progress.approval.reportNumber ? `Certified: ${progress.approval.reportNumber}` : 'Sheet issued';
+  }
 }

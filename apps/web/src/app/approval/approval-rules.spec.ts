@@ -1,5 +1,5 @@
-import type { Submission } from '@tunnelwright/contracts';
-import { submissionStateText } from './approval-labels';
+import type { Submission, TestProgress } from '@tunnelwright/contracts';
+import { progressText, submissionStateText } from './approval-labels';
 import { decisionBlock, defaultPicks, isRevision, issueBlock, pickedReductionIds, picksProblem, runChoices, type Caller } from './approval-rules';
 
 const uploader = { id: '0b7e5a3c-1d2f-4e6a-9b8c-7d6e5f4a3b2c', name: 'Nell Ashgrove' };
@@ -108,5 +108,27 @@ describe('submissionStateText', () => {
     expect(submissionStateText({ state: 'sent_back', sheet: null })).toBe('Sent back');
     expect(submissionStateText({ state: 'approved', sheet: null })).toBe('Approved, sheet not issued yet');
     expect(submissionStateText({ state: 'approved', sheet: { id: uploader.id, reportNumber: 'BAL-2026-0003-R2', state: 'valid' } })).toBe('Approved, issued as BAL-2026-0003-R2');
+  });
+});
+
+describe('progressText', () => {
+  const progress = (customerStage: TestProgress['customerStage'], state: TestProgress['approval']['state'], reportNumber: string | null = null): TestProgress => ({
+    customerStage,
+    approval: { state, submissionId: null, sheetId: null, reportNumber },
+  });
+
+  it('gives customers the stage, naming the certified sheet', () => {
+    expect(progressText(progress('booked', 'none'), true)).toBe('Booked');
+    expect(progressText(progress('in_test', 'none'), true)).toBe('In test');
+    expect(progressText(progress('being_checked', 'sent_back'), true)).toBe('Being checked');
+    expect(progressText(progress('certified', 'issued', 'BAL-2026-0002-R1'), true)).toBe('Certified: BAL-2026-0002-R1');
+  });
+
+  it('gives staff the approval state', () => {
+    expect(progressText(progress('in_test', 'none'), false)).toBe('Not submitted for approval');
+    expect(progressText(progress('being_checked', 'awaiting_approval'), false)).toBe('Waiting for approval');
+    expect(progressText(progress('being_checked', 'approved'), false)).toBe('Approved, sheet not issued yet');
+    expect(progressText(progress('certified', 'issued', 'BAL-2026-0002-R2'), false)).toBe('Certified: BAL-2026-0002-R2');
+    expect(progressText(undefined, false)).toBe('');
   });
 });

@@ -1,6 +1,6 @@
 import { HttpClient, HttpEventType, HttpResponse, type HttpEvent } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
-import type { Preview, ReductionOverrides, ReductionView, Run, RunInput, Test } from '@tunnelwright/contracts';
+import type { Preview, ReductionOverrides, ReductionView, Run, RunInput, TestWithProgress } from '@tunnelwright/contracts';
 import { Observable, filter, map } from 'rxjs';
 
 /** A page of reduced points as the API sends it. */
@@ -56,12 +56,13 @@ export type UploadEvent = { readonly kind: 'progress'; readonly fraction: number
 export class IngestApi {
   private readonly http = inject(HttpClient);
 
-  tests(): Observable<Test[]> {
-    return this.http.get<Test[]>('/api/tests');
+  /** Tests with where each stands on its way to a certified sheet. */
+  tests(): Observable<TestWithProgress[]> {
+    return this.http.get<TestWithProgress[]>('/api/tests');
   }
 
-  test(id: string): Observable<Test> {
-    return this.http.get<Test>(`/api/tests/${id}`);
+  test(id: string): Observable<TestWithProgress> {
+    return this.http.get<TestWithProgress>(`/api/tests/${id}`);
   }
 
   runs(testId: string): Observable<Run[]> {

@@ -7,6 +7,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 import type { ReductionState, RunKind } from '@tunnelwright/contracts';
+import { progressText } from '../approval/approval-labels';
 import { ApprovalPanel } from '../approval/approval-panel';
 import { TestAuditPanel } from '../approval/test-audit-panel';
 import { AuthService } from '../core/auth-service';
@@ -71,7 +72,17 @@ export class TestPage {
     this.isStaff() ? ['runNumber', 'kind', 'configuration', 'state', 'points', 'warnings', 'chart'] : ['runNumber', 'kind', 'configuration', 'files'],
   );
   protected readonly title = computed(() => (this.test.hasValue() ? this.test.value().title : 'Test'));
-  protected readonly testState = computed(() => (this.test.hasValue() ? testStateLabels[this.test.value().state] : ''));
+  protected readonly testState = computed(() => {
+    if (!this.test.hasValue()) return '';
+    const test = this.test.value();
+    // Customers read the stage of their test; staff the test's state and where its approval stands.
+    return this.isStaff() ? `${testStateLabels[test.state]} · ${progressText(test.progress, false)}` : progressText(test.progress, true);
+  });
+  /** The valid sheet of a certified test, for the customer's link to it. */
+  protected readonly certifiedSheet = computed(() => {
+    const approval = this.test.hasValue() ? this.test.value().progress?.approval : undefined;
+    return approval?.sheetId && approval.reportNumber ? { id: approval.sheetId, reportNumber: approval.reportNumber } : null;
+  });
   protected readonly caution = computed(() => (this.runs.hasValue() ? this.runs.value() : []).find((row) => row.latest)?.latest?.caution ?? '');
   protected readonly kindLabel = (kind: RunKind) => runKindLabels[kind];
   protected readonly stateLabel = (state: ReductionState) => reductionStateLabels[state];

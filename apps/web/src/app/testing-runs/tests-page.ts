@@ -1,8 +1,10 @@
-import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatListModule } from '@angular/material/list';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
+import { progressText } from '../approval/approval-labels';
+import { AuthService } from '../core/auth-service';
 import { problemMessage } from '../core/problem-message';
 import { SafetyNotice } from '../core/safety-notice';
 import { EmptyState } from '../shared/empty-state';
@@ -30,7 +32,14 @@ import { testStateLabels } from './run-labels';
           @for (test of tests.value(); track test.id) {
             <a mat-list-item [routerLink]="['/tests', test.id]">
               <span matListItemTitle>{{ test.title }}</span>
-              <span matListItemLine>{{ stateLabels[test.state] }} · {{ test.configurations.length }} configuration(s)</span>
+              <span matListItemLine>
+                @if (isCustomer()) {
+                  {{ progressText(test.progress, true) }}
+                } @else {
+                  {{ stateLabels[test.state] }} · {{ progressText(test.progress, false) }}
+                }
+                · {{ test.configurations.length }} configuration(s)
+              </span>
             </a>
           }
         </mat-nav-list>
@@ -51,6 +60,10 @@ import { testStateLabels } from './run-labels';
 })
 export class TestsPage {
   private readonly api = inject(IngestApi);
+  private readonly role = inject(AuthService).role;
+  /** Customers read the stage of their test; staff the test's state and where its approval stands. */
+  protected readonly isCustomer = computed(() => this.role() === 'customer');
+  protected readonly progressText = progressText;
   protected readonly tests = rxResource({ stream: () => this.api.tests() });
   protected readonly stateLabels = testStateLabels;
   protected readonly message = (error: unknown) => problemMessage(error, 'The tests could not be loaded.');
