@@ -20,6 +20,12 @@ export const testingRunsRoutes: Routes = [
     loadComponent: () => import('./upload-page').then((m) => m.UploadPage),
   },
   {
+    path: 'tests/:id/review',
+    title: 'Review · Tunnelwright',
+    canActivate: [roleGuard(['technician', 'analyst', 'lab_manager'])],
+    loadComponent: () => import('../review/review-page').then((m) => m.ReviewPage),
+  },
+  {
     path: 'runs/:id',
     title: 'Run · Tunnelwright',
     canActivate: [roleGuard(['technician', 'analyst', 'lab_manager'])],
