@@ -20,6 +20,7 @@ import { EmptyState } from '../shared/empty-state';
 import { ErrorBanner } from '../shared/error-banner';
 import { focusFirstInvalid } from '../shared/focus-first-invalid';
 import { numberErrorText } from '../shared/number-error-text';
+import { CertifiedResultPanel } from './certified-result-panel';
 import { PartsEditor } from './parts-editor';
 import { PlanResults } from './plan-results';
 import { buildPlanForm, fillPlanForm, planDraftFrom, resetPlanForm } from './plan-form';
@@ -54,6 +55,7 @@ const EVALUATE_AFTER_MS = 400;
     MatSelectModule,
     EmptyState,
     ErrorBanner,
+    CertifiedResultPanel,
     PartsEditor,
     PlanResults,
   ],
@@ -199,6 +201,14 @@ export class PlannerPage {
   }
 
   protected readonly canSave = computed(() => !(this.isAnalyst() && this.selected() === null));
+  /** Analysts and lab managers link certified results to a plan and pick balances. */
+  protected readonly isResultLinker = computed(() => this.isLabManager() || this.isAnalyst());
+
+  /** After a link or unlink: the open plan as it now reads, and the list's summary with it. */
+  protected certifiedChanged(plan: PlanDetail): void {
+    this.selected.set(plan);
+    this.plans.reload();
+  }
 
   protected save(): void {
     this.saveError.set(null);
