@@ -24,6 +24,8 @@ export type PlanForm = FormGroup<{
   parts: FormArray<PartForm>;
   speeds: FormControl<string>;
   tunnelId: FormControl<string>;
+  /** A lab balance whose Fx capacity is the drag capacity; '' when the capacity is typed. */
+  balanceId: FormControl<string>;
   dragCapacity: FormControl<number | null>;
   scale: FormControl<number | null>;
   yawMarginPercent: FormControl<number | null>;
@@ -90,6 +92,7 @@ const planDefaults = {
   name: '',
   speeds: '20, 30, 40',
   tunnelId: '',
+  balanceId: '',
   dragCapacity: null,
   scale: 1,
   yawMarginPercent: 25,
@@ -107,15 +110,22 @@ const planDefaults = {
   setupMinutes: 60,
 } as const;
 
+/** A typed drag capacity is required unless a balance gives it. */
+function capacityUnlessBalance(control: AbstractControl): ValidationErrors | null {
+  if (control.parent?.get('balanceId')?.value) return null;
+  return Validators.required(control) ?? positiveNumber(control);
+}
+
 /** A fresh plan with one empty shape row and the defaults. */
 export function buildPlanForm(): PlanForm {
   const d = planDefaults;
-  return new FormGroup({
+  const form: PlanForm = new FormGroup({
     name: new FormControl<string>(d.name, { nonNullable: true, validators: [Validators.required, Validators.maxLength(120)] }),
     parts: new FormArray<PartForm>([buildPartForm()]),
     speeds: new FormControl<string>(d.speeds, { nonNullable: true, validators: [speedList] }),
     tunnelId: new FormControl<string>(d.tunnelId, { nonNullable: true, validators: [Validators.required] }),
-    dragCapacity: num(d.dragCapacity, positiveRequired),
+    balanceId: new FormControl<string>(d.balanceId, { nonNullable: true }),
+    dragCapacity: num(d.dragCapacity, [capacityUnlessBalance]),
     scale: num(d.scale, [...positiveRequired, Validators.max(10)]),
     yawMarginPercent: num(d.yawMarginPercent, [Validators.required, Validators.min(0), Validators.max(200)]),
     interferenceFactor: num(d.interferenceFactor, [...positiveRequired, Validators.max(3)]),
@@ -131,6 +141,12 @@ export function buildPlanForm(): PlanForm {
     changeMinutes: num(d.changeMinutes, [Validators.required, Validators.min(0)]),
     setupMinutes: num(d.setupMinutes, [Validators.required, Validators.min(0)]),
   });
+  // Choosing a balance replaces the typed capacity; clearing it asks for one again. Both live as long as the form.
+  form.controls.balanceId.valueChanges.subscribe((balanceId) => {
+    if (balanceId && form.controls.dragCapacity.value !== null) form.controls.dragCapacity.setValue(null, { emitEvent: false });
+    form.controls.dragCapacity.updateValueAndValidity();
+  });
+  return form;
 }
 
 /** Empties the editor back to one shape row and the defaults. */
@@ -168,7 +184,7 @@ export function planDraftFrom(form: PlanForm): PlanInputDraft {
     }),
     speeds: parseSpeeds(c.speeds.value) ?? [],
     tunnelId: c.tunnelId.value,
-    dragCapacity: value(c.dragCapacity),
+    ...(c.balanceId.value ? { balanceId: c.balanceId.value } : { dragCapacity: value(c.dragCapacity) }),
     scale: value(c.scale),
     yawMargin: value(c.yawMarginPercent) / 100,
     interferenceFactor: value(c.interferenceFactor),
@@ -208,6 +224,8 @@ export function fillPlanForm(form: PlanForm, name: string, input: PlanInput, sha
     name,
     speeds: input.speeds.join(', '),
     tunnelId: input.tunnelId,
+    // A typed capacity wins over a balance in the evaluation, so the form keeps whichever the plan really uses.
+    balanceId: input.dragCapacity === undefined ? (input.balanceId ?? '') : '',
     dragCapacity: input.dragCapacity ?? null,
     scale: input.scale,
     yawMarginPercent: Math.round(input.yawMargin * 1e6) / 1e4,

@@ -151,3 +151,51 @@ describe('PlannerPage', { timeout: 20_000 }, () => {
     expect(await loader.getHarness(MatButtonHarness.with({ selector: '[aria-label="Load version 1 into the editor"]' }))).toBeTruthy();
   });
 });
+
+describe('PlannerPage balance picker', { timeout: 20_000 }, () => {
+  const balance = { id: '9e3f4a5b-6c7d-4e8f-a091-b2c3d4e5f607', identifier: 'Demo six-component balance', description: '', capacities: [450, 450, 900, 60, 60, 60], currentCalibration: null, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z' };
+
+  function start(role: 'lab_manager' | 'customer') {
+    TestBed.configureTestingModule({ imports: [PlannerPage], providers: [provideHttpClient(), provideHttpClientTesting()] });
+    TestBed.inject(AuthService).acceptSession({
+      accessToken: 't',
+      expiresIn: 900,
+      user: { id: '3c4d5e6f-7081-4923-8a4b-5c6d7e8f9012', email: 'lab.lead@example.test', name: 'Lab Lead', role, organisationId: '1d2c3b4a-5f6e-4d7c-8b9a-0f1e2d3c4b5a', organisationName: 'Example organisation' },
+    });
+    const fixture = TestBed.createComponent(PlannerPage);
+    const backend = TestBed.inject(HttpTestingController);
+    fixture.detectChanges();
+    backend.expectOne('/api/plans').flush({ items: [], caution });
+    backend.expectOne('/api/shapes').flush({ items: [sphere], caution });
+    backend.expectOne('/api/tunnels').flush([tunnel]);
+    return { fixture, backend, loader: TestbedHarnessEnvironment.loader(fixture) };
+  }
+
+  it('lets a lab manager take the drag capacity from a balance instead of typing it', async () => {
+    const { fixture, backend, loader } = start('lab_manager');
+    backend.expectOne('/api/organisations').flush([]);
+    backend.expectOne('/api/balances').flush([balance]);
+    await fixture.whenStable();
+    await (await loader.getHarness(MatSelectHarness.with({ selector: '.parts mat-select' }))).clickOptions({ text: 'Sphere' });
+    await (await (await loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: 'Diameter (m)' }))).getControl(MatInputHarness))?.setValue('0.2');
+    await (await loader.getHarness(MatSelectHarness.with({ selector: '[formcontrolname="tunnelId"]' }))).clickOptions({ text: /Demo tunnel/ });
+    await (await loader.getHarness(MatSelectHarness.with({ selector: '[formcontrolname="balanceId"]' }))).clickOptions({ text: 'Demo six-component balance · Fx 450 N' });
+    expect(await loader.getHarnessOrNull(MatFormFieldHarness.with({ floatingLabelText: 'Balance drag capacity (N)' }))).toBeNull();
+    await new Promise((done) => setTimeout(done, 450));
+    await fixture.whenStable();
+    const call = backend.expectOne('/api/plans/evaluate');
+    expect(call.request.body.balanceId).toBe(balance.id);
+    expect(call.request.body).not.toHaveProperty('dragCapacity');
+    call.flush(evaluation);
+    backend.verify();
+  });
+
+  it('asks customers for a typed capacity and never lists the lab’s balances', async () => {
+    const { fixture, backend, loader } = start('customer');
+    await fixture.whenStable();
+    backend.expectNone('/api/balances');
+    expect(await loader.getHarnessOrNull(MatSelectHarness.with({ selector: '[formcontrolname="balanceId"]' }))).toBeNull();
+    expect(await loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: 'Balance drag capacity (N)' }))).toBeTruthy();
+    backend.verify();
+  });
+});

@@ -92,6 +92,29 @@ export class PlannerPage {
     stream: () => this.http.get<Organisation[]>('/api/organisations').pipe(map((list) => list.filter((org) => org.kind === 'customer'))),
   });
   protected readonly organisationId = signal('');
+  /**
+   * The lab's balances, for analysts and lab managers only: customers cannot list lab equipment, so they type the
+   * capacity the lab gives them (a plan whose balance the lab chose keeps it).
+   */
+  protected readonly balances = rxResource({
+    params: () => (this.isLabManager() || this.isAnalyst() ? true : undefined),
+    stream: () => this.api.balances(),
+  });
+  protected readonly balanceItems = computed(() =>
+    (this.balances.hasValue() ? this.balances.value() : []).filter((balance) => (balance.capacities[0] ?? 0) > 0),
+  );
+  protected readonly balancesError = computed(() => {
+    const error = this.balances.error();
+    return error ? problemMessage(error.cause ?? error, 'The balances could not be loaded.') : null;
+  });
+  private readonly balanceId = toSignal(this.form.controls.balanceId.valueChanges, { initialValue: this.form.controls.balanceId.value });
+  /** The balance a customer's plan uses, as its evaluation names it. */
+  protected readonly chosenBalanceName = computed(() => {
+    if (!this.balanceId()) return null;
+    const state = this.evaluation();
+    const named = state.kind === 'ready' ? state.evaluation.tunnel.balanceIdentifier : this.selected()?.evaluation.tunnel.balanceIdentifier;
+    return named ?? 'chosen by the lab';
+  });
 
   protected readonly selected = signal<PlanDetail | null>(null);
   /** Every saved version of the open plan, newest first; reloaded after each save. */
