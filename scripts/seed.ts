@@ -11,6 +11,7 @@ import { seedBookings } from './seed/bookings';
 import { demoServices, demoTunnels } from './seed/catalogue';
 import { demoCustomers, demoLab, demoPassword, demoUsers } from './seed/demo-users';
 import { seedIngest } from './seed/ingest';
+import { seedPlanCertifiedLink } from './seed/plan-certified-link';
 import { seedPlans } from './seed/plans';
 
 async function ensureOrganisation(trx: Knex.Transaction, name: string, kind: 'lab' | 'customer', created: string[]): Promise<Organisation> {
@@ -78,6 +79,7 @@ try {
   const created = await seed(knex);
   await seedIngest(knex, created);
   await seedApproval(knex, created, (process.env.PUBLIC_URL ?? 'http://localhost:3000').replace(/\/+$/, ''));
+  await seedPlanCertifiedLink(knex, created);
   console.log(created.length === 0 ? 'Demo data already present; nothing changed.' : `Created:\n  ${created.join('\n  ')}`);
   console.log(`\nDemo sign-ins (password for all: ${demoPassword}):`);
   for (const person of demoUsers) console.log(`  ${person.role.padEnd(12)} ${person.email.padEnd(34)} ${person.name} — ${person.organisation}`);

@@ -21,7 +21,7 @@ const customerAddresses: Record<string, string[]> = {
   [demoCustomers.tarnwick]: ['Building 9, Tarn Road', 'Tarnwick TW8 2PL', 'United Kingdom'],
 };
 
-const certifiedTitle = 'Estate car yaw sweep, baseline and mirrors off';
+export const certifiedTitle = 'Estate car yaw sweep, baseline and mirrors off';
 const pendingTitle = 'Delivery van drag at yaw, open jet';
 
 async function byEmail(knex: Knex, email: string): Promise<User> {

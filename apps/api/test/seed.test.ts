@@ -2,7 +2,9 @@ import { execFile } from 'node:child_process';
 import { promisify } from 'node:util';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPassword, demoUsers } from '../../../scripts/seed/demo-users';
+import { PLANNER_CAUTION } from '@tunnelwright/aero';
+import { demoCustomers, demoPassword, demoUsers } from '../../../scripts/seed/demo-users';
+import type { ResultSheetData } from '../src/reports/result-sheet-data';
 import { createTestApp, testDatabaseUrl, type TestApp } from './support/test-app';
 
 const run = promisify(execFile);
@@ -46,6 +48,30 @@ describe('scripts/seed.ts', () => {
       expect(sheets[0]!.supersededById).toBe(sheets[1]!.id);
       const waiting = await t.knex('submissions').join('tests', 'tests.id', 'submissions.testId').where({ 'tests.title': 'Delivery van drag at yaw, open jet', 'submissions.state': 'awaiting_approval' }).count({ n: '*' }).first();
       expect(Number(waiting?.n)).toBe(1);
+
+      // Quillfen's demo plan is compared with the valid revision, R2, not the superseded R1.
+      const r2 = sheets[1]!;
+      const plan = await t.knex('plans').join('organisations', 'organisations.id', 'plans.organisationId').where({ 'organisations.name': demoCustomers.quillfen, 'plans.name': 'Inspection trolley with rider' }).first('plans.*');
+      expect(plan.measuredSheetId).toBe(r2.id);
+      expect(plan.measuredConfigurationCode).toBe('A');
+      // Read back from what the sheet states: configuration A's point nearest 0° yaw, C_D·S × scale² (similar figures, definition).
+      const data = (await t.knex('resultSheets').where('id', r2.id).first('data')).data as ResultSheetData;
+      const configuration = data.configurations.find((c) => c.code === 'A')!;
+      const nearest = configuration.points.reduce((best, p) => (Math.abs(p.yaw) < Math.abs(best.yaw) ? p : best));
+      expect(plan.measuredYaw).toBe(nearest.yaw);
+      expect(Math.abs(plan.measuredDragArea - nearest.dragArea.value * data.article.scale ** 2)).toBeLessThanOrEqual(1e-12);
+      expect(Math.abs(plan.measuredExpandedUncertainty - nearest.dragArea.expandedUncertainty * data.article.scale ** 2)).toBeLessThanOrEqual(1e-12);
+      const links = await t.knex('auditEntries').where({ entity: 'plan', entityId: plan.id, action: 'plan.certified_result_linked' });
+      expect(links).toHaveLength(1);
+
+      // The Quillfen customer sees the comparison on the plan, with the caution.
+      const quillfen = demoUsers.find((person) => person.organisation === demoCustomers.quillfen && person.role === 'customer')!;
+      const login = await request(t.app).post('/api/auth/login').send({ email: quillfen.email, password: demoPassword });
+      const seen = await request(t.app).get(`/api/plans/${plan.id}`).set('Authorization', `Bearer ${login.body.accessToken}`);
+      expect(seen.status).toBe(200);
+      expect(seen.body.measured.certified).toMatchObject({ reportNumber: r2.reportNumber, sheetState: 'valid', configurationCode: 'A' });
+      expect(seen.body.evaluation.measured.source).toBe(plan.measuredSource);
+      expect(seen.body.caution).toBe(PLANNER_CAUTION);
     }, 60_000);
   });
 });
