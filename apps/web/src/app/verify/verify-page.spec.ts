@@ -2,7 +2,7 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { By } from '@angular/platform-browser';
-import { provideRouter } from '@angular/router';
+import { Router, provideRouter } from '@angular/router';
 import type { Verification } from '@tunnelwright/contracts';
 import { FileDropZone } from '../shared/file-drop-zone';
 import { VerifyPage } from './verify-page';
@@ -44,6 +44,21 @@ describe('VerifyPage', () => {
     expect(text).toContain('Superseded by BAL-2026-0011-R3 of 1 Dec 2026');
     expect(text).toContain('e'.repeat(64));
     expect(host.querySelector('a[href="/verify/BAL-2026-0011-R3"]')).not.toBeNull();
+  });
+
+  it('looks up a typed number when Enter submits the form, without leaving the page', async () => {
+    open(issued.reportNumber);
+    backend.expectOne(`/api/verify/${issued.reportNumber}`).flush(issued);
+    await fixture.whenStable();
+    const router = TestBed.inject(Router);
+    const navigate = vi.spyOn(router, 'navigate').mockResolvedValue(true);
+    const input = host.querySelector<HTMLInputElement>('form.lookup input')!;
+    input.value = ' BAL-2026-0011-R3 ';
+    input.dispatchEvent(new Event('input'));
+    const submitted = new Event('submit', { cancelable: true });
+    host.querySelector('form.lookup')!.dispatchEvent(submitted);
+    expect(submitted.defaultPrevented).toBe(true);
+    expect(navigate).toHaveBeenCalledWith(['/verify', 'BAL-2026-0011-R3']);
   });
 
   it('says clearly when no sheet has the number', async () => {

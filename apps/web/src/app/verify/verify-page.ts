@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -63,6 +63,8 @@ export class VerifyPage {
   private readonly router = inject(Router);
 
   protected readonly lookup = new FormControl('', { nonNullable: true, validators: Validators.required });
+  /** The look-up as a form, so Enter in the field submits it here rather than as a page load. */
+  protected readonly lookupForm = new FormGroup({ reportNumber: this.lookup });
   protected readonly sheet = rxResource({
     params: () => this.reportNumber() ?? '',
     stream: ({ params }) => (params === '' ? of(null) : this.api.verification(params)),
