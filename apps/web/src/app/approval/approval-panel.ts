@@ -1,5 +1,5 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
@@ -96,6 +96,8 @@ import { resourceCause } from './resource-error';
 export class ApprovalPanel {
   /** The test's id. */
   readonly testId = input.required<string>();
+  /** Emitted after a submission, decision or issue, so the page can refresh where the test stands. */
+  readonly changed = output<void>();
 
   private readonly api = inject(ApprovalApi);
   private readonly auth = inject(AuthService);
@@ -153,6 +155,7 @@ export class ApprovalPanel {
         if (submission) {
           this.snackBar.open(`Submission ${submission.sequence} is waiting for approval.`, undefined, { duration: 5000 });
           this.submissions.reload();
+          this.changed.emit();
         }
       });
   }
@@ -167,6 +170,7 @@ export class ApprovalPanel {
             duration: 5000,
           });
           this.submissions.reload();
+          this.changed.emit();
         }
       });
   }
@@ -181,6 +185,7 @@ export class ApprovalPanel {
           this.snackBar.open(`${sheet.reportNumber} issued and sent to the customer.`, undefined, { duration: 6000 });
           this.submissions.reload();
           this.sheets.reload();
+          this.changed.emit();
         }
       });
   }

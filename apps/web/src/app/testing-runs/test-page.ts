@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, viewChild } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatChipsModule } from '@angular/material/chips';
@@ -87,4 +87,11 @@ export class TestPage {
   protected readonly kindLabel = (kind: RunKind) => runKindLabels[kind];
   protected readonly stateLabel = (state: ReductionState) => reductionStateLabels[state];
   protected readonly message = (error: unknown, what: string) => problemMessage(error, `The ${what} could not be loaded.`);
+  private readonly auditPanel = viewChild(TestAuditPanel);
+
+  /** After a submission, decision or issue: where the test stands and its audit trail have changed. */
+  protected approvalChanged(): void {
+    this.test.reload();
+    this.auditPanel()?.reload();
+  }
 }
