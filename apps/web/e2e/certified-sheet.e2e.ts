@@ -1,0 +1,268 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import { createHash } from 'node:crypto';
+import { createWriteStream, mkdirSync, mkdtempSync, readdirSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { Balance, BalanceCalibration, createKnex, Organisation, TestArticle, TestRecord, Tunnel, User } from '@tunnelwright/db';
+import { simpleParser } from 'mailparser';
+import type { Page } from 'playwright-core';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { demoCustomers, demoPassword, demoUsers } from '../../../scripts/seed/demo-users';
+import { repoRoot, startApiServer, type ApiServer } from './support/api-server';
+import { launchBrowser, type TestBrowser } from './support/browser';
+import { signIn } from './support/sign-in';
+
+const shots = '/tmp/tw-shots';
+const databaseUrl = process.env.TW_E2E_DATABASE_URL ?? 'postgres://postgres@127.0.0.1:54329/tunnelwright_e2e';
+const redisUrl = process.env.TW_E2E_REDIS_URL ?? 'redis://127.0.0.1:63790/1';
+const exampleFile = join(repoRoot, 'libs/aero/examples/closed-car-yaw-sweep.csv');
+const testTitle = 'Hatchback roof-rail yaw sweep (invented)';
+const workerLog = '/tmp/tw-e2e-certified-worker.log';
+
+function userOf(role: 'technician' | 'analyst' | 'lab_manager' | 'customer') {
+  const user = role === 'customer' ? demoUsers.find((candidate) => candidate.organisation === demoCustomers.quillfen) : demoUsers.find((candidate) => candidate.role === role);
+  if (!user) throw new Error(`The demo seed has no ${role}`);
+  return user;
+}
+
+/** Starts the background worker with the API's database, queue and raw store, so uploads are reduced. */
+function startWorkerProcess(): ChildProcess {
+  const log = createWriteStream(workerLog, { flags: 'w' });
+  const child = spawn('node', ['--import', 'tsx', 'apps/worker/src/main.ts'], {
+    cwd: repoRoot,
+    env: { ...process.env, DATABASE_URL: databaseUrl, REDIS_URL: redisUrl, LOG_LEVEL: 'info' },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  child.stdout?.pipe(log);
+  child.stderr?.pipe(log);
+  return child;
+}
+
+async function stopWorkerProcess(child: ChildProcess | undefined): Promise<void> {
+  if (!child || child.exitCode !== null) return;
+  const exited = new Promise((done) => child.once('exit', done));
+  child.kill('SIGTERM');
+  const timer = setTimeout(() => child.kill('SIGKILL'), 10_000);
+  await exited;
+  clearTimeout(timer);
+}
+
+/** Opens a running test of the demo customer in the closed-section tunnel, with a balance calibrated until far ahead. */
+async function openDemoTest(): Promise<void> {
+  const knex = createKnex(databaseUrl);
+  try {
+    const customer = await Organisation.query(knex).findOne({ name: demoCustomers.quillfen });
+    const manager = await User.query(knex).findOne({ email: userOf('lab_manager').email });
+    const tunnel = await Tunnel.query(knex).findOne({ kind: 'closed' });
+    if (!customer || !manager || !tunnel) throw new Error('The demo seed lacks the customer, lab manager or closed tunnel');
+    const article = await TestArticle.query(knex).insert({
+      organisationId: customer.id,
+      name: 'Hatchback model with roof rails, 1:4 (invented)',
+      description: '',
+      kind: 'road_vehicle',
+      conditionOnReceipt: 'as new',
+      referenceArea: 0.14,
+      referenceAreaKind: 'frontal',
+      referenceLength: 0.7,
+      volume: 0.1,
+      frontalArea: null,
+      momentCentreX: 0,
+      momentCentreY: 0,
+      momentCentreZ: 0,
+      scale: 4,
+    });
+    const balance = await Balance.query(knex).insert({ identifier: 'SB-E2E-CERT-1', description: 'Invented six-component balance', capacities: [400, 400, 1200, 120, 200, 120] });
+    const identity = [0, 1, 2, 3, 4, 5].map((i) => [0, 1, 2, 3, 4, 5].map((j) => (i === j ? 1 : 0)));
+    await BalanceCalibration.query(knex).insert({ balanceId: balance.id, version: 1, matrices: { linear: identity }, calibratedOn: '2026-01-10', dueOn: '2099-01-10', enteredBy: manager.id });
+    await TestRecord.query(knex).insert({
+      organisationId: customer.id,
+      articleId: article.id,
+      tunnelId: tunnel.id,
+      balanceId: balance.id,
+      bookingId: null,
+      title: testTitle,
+      state: 'running',
+      configurations: [{ label: 'rails on', description: 'roof rails fitted' }],
+      reductionSettings: { minimumSamplesPerPoint: 2, corrections: { solidBlockage: 'frontal-area', wakeBlockage: 'none' } },
+      createdBy: manager.id,
+    });
+  } finally {
+    await knex.destroy();
+  }
+}
+
+/** The text of the newest mail to `to` whose subject matches, read from the SMTP fake's folder, waiting for it to arrive. */
+async function mailTo(mailDir: string, to: string, subject: RegExp): Promise<{ subject: string; text: string }> {
+  const deadline = Date.now() + 30_000;
+  while (Date.now() < deadline) {
+    for (const name of readdirSync(mailDir).sort().reverse()) {
+      const parsed = await simpleParser(readFileSync(join(mailDir, name)));
+      const recipients = [parsed.to ?? []].flat().flatMap((address) => address.value.map((entry) => entry.address?.toLowerCase()));
+      if (recipients.includes(to.toLowerCase()) && subject.test(parsed.subject ?? '')) {
+        return { subject: parsed.subject ?? '', text: parsed.text ?? '' };
+      }
+    }
+    await new Promise((done) => setTimeout(done, 250));
+  }
+  throw new Error(`No mail to ${to} with a subject matching ${subject} arrived within 30 s`);
+}
+
+async function openTest(page: Page): Promise<void> {
+  await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Tests', exact: true }).click();
+  await page.getByRole('link', { name: testTitle }).click();
+  await page.getByRole('heading', { name: testTitle, level: 1 }).waitFor();
+}
+
+const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
+
+describe('certified result sheet', () => {
+  let api: ApiServer;
+  let browser: TestBrowser;
+  let worker: ChildProcess | undefined;
+  let reportNumber = '';
+  let pdf: Buffer = Buffer.alloc(0);
+
+  beforeAll(async () => {
+    mkdirSync(shots, { recursive: true });
+    // The API and the worker, both child processes, share the raw store, spool folder and queue prefix.
+    Object.assign(process.env, {
+      RAW_STORE: 'fs',
+      RAW_STORE_DIR: mkdtempSync(join(tmpdir(), 'tw-e2e-raw-')),
+      UPLOAD_TMP_DIR: mkdtempSync(join(tmpdir(), 'tw-e2e-upload-')),
+      QUEUE_PREFIX: `tw-e2e-${Date.now().toString(36)}`,
+    });
+    api = await startApiServer();
+    await openDemoTest();
+    worker = startWorkerProcess();
+    browser = await launchBrowser();
+  }, 180_000);
+
+  afterEach(() => {
+    expect(browser.problems).toEqual([]);
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    await stopWorkerProcess(worker);
+    await api?.stop();
+  });
+
+  it('a technician uploads a run and submits its reduction; the analyst, who holds a signing right, approves it and issues the sheet', async () => {
+    const technician = await browser.freshPage();
+    await signIn(technician, api.baseUrl, userOf('technician').email);
+    await openTest(technician);
+    await technician.getByRole('link', { name: 'Upload run files' }).click();
+    await technician.getByLabel('Configuration label').fill('rails on');
+    await technician.getByRole('button', { name: 'Create run' }).click();
+    await expect.poll(() => technician.getByRole('combobox', { name: 'Run' }).innerText()).toContain('Run 1');
+    await technician.getByLabel('Choose run files').setInputFiles(exampleFile);
+    await technician.getByText(/samples in 7 points/).waitFor();
+    await technician.getByRole('button', { name: /Upload 1 checked file/ }).click();
+    await technician.getByText(/Reduction v1: Reduced, 7 points/).waitFor({ timeout: 60_000 });
+    await technician.getByRole('link', { name: 'Back to the test' }).click();
+
+    await technician.getByRole('button', { name: 'Submit for approval' }).click();
+    const submit = technician.getByRole('dialog');
+    // The newest done version of the run is chosen already.
+    await expect.poll(() => submit.getByRole('combobox', { name: /^Run 1/ }).innerText()).toMatch(/v1 · 7 points/);
+    await submit.getByLabel('Note for the analyst').fill('Yaw sweep with the roof rails fitted.');
+    await submit.getByRole('button', { name: 'Submit for approval' }).click();
+    await technician.getByText('Submission 1 is waiting for approval.').waitFor();
+    const waiting = technician.getByRole('listitem', { name: 'Submission 1' });
+    await waiting.getByText('Waiting for approval').waitFor();
+    // The technician neither decides nor issues; the panel says who does.
+    await waiting.getByRole('note').getByText(/Only an analyst holding a signing right/).waitFor();
+    await technician.screenshot({ path: `${shots}/certified-submitted.png`, fullPage: true });
+
+    const analyst = await browser.freshPage();
+    await signIn(analyst, api.baseUrl, userOf('analyst').email);
+    await openTest(analyst);
+    const card = analyst.getByRole('listitem', { name: 'Submission 1' });
+    await card.getByText(`by ${userOf('technician').name}`, { exact: false }).first().waitFor();
+    await card.getByText(/Run 1 \(Data, rails on\), v1, uploaded by/).waitFor();
+    await card.getByText('Yaw sweep with the roof rails fitted.').waitFor();
+    await card.getByRole('button', { name: 'Approve' }).click();
+    const approve = analyst.getByRole('dialog');
+    await approve.getByLabel('Comment (optional)').fill('Repeatability within the method limit.');
+    await approve.getByRole('button', { name: 'Approve' }).click();
+    await analyst.getByText('Submission 1 approved.').waitFor();
+    await card.getByText('Approved, sheet not issued yet').waitFor();
+
+    await card.getByRole('button', { name: 'Issue result sheet' }).click();
+    const issue = analyst.getByRole('dialog');
+    await issue.getByText(/published to the customer and e-mailed/).waitFor();
+    await issue.getByRole('button', { name: 'Issue result sheet' }).click();
+    const issued = analyst.getByText(/issued and sent to the customer/);
+    await issued.waitFor({ timeout: 30_000 });
+    reportNumber = /(\S+) issued and sent to the customer/.exec(await issued.innerText())?.[1] ?? '';
+    expect(reportNumber).toMatch(/^[A-Z]+-\d{4}-\d{4}-R1$/);
+    await card.getByText(`Approved, issued as ${reportNumber}`).waitFor();
+    // Where the test stands follows at once.
+    await analyst.getByText(`Under way · Certified: ${reportNumber}`).waitFor();
+    const sheets = analyst.getByRole('table', { name: 'Result sheets of this test' });
+    await sheets.getByRole('row').filter({ hasText: reportNumber }).getByText('Valid').waitFor();
+    await analyst.getByRole('note').filter({ hasText: /licensed engineer|design/i }).first().waitFor();
+    await analyst.screenshot({ path: `${shots}/certified-issued.png`, fullPage: true });
+  }, 120_000);
+
+  it('the customer follows the e-mailed link, signs in, downloads the PDF and the public page says it is exactly the issued file, and a one-byte change is not', async () => {
+    expect(reportNumber).not.toBe('');
+    const customer = userOf('customer');
+    const mail = await mailTo(api.mail.mailDir, customer.email, new RegExp(`^Result sheet ${reportNumber} is ready`));
+    const link = new RegExp(`${api.baseUrl.replace(/[.:/]/g, '\\$&')}/documents/[0-9a-f-]{36}`).exec(mail.text)?.[0];
+    expect(link).toBeDefined();
+
+    const page = await browser.freshPage();
+    await page.goto(link!);
+    // Signed out, the link leads through sign-in and back to the sheet.
+    await page.getByLabel('E-mail').fill(customer.email);
+    await page.getByLabel('Password').fill(demoPassword);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: reportNumber, level: 1 }).waitFor();
+    expect(new URL(page.url()).pathname).toBe(new URL(link!).pathname);
+    await page.getByText(testTitle).waitFor();
+    await page.getByRole('note').filter({ hasText: /licensed engineer|design/i }).first().waitFor();
+    const shownHash = (await page.locator('code.hash').innerText()).trim();
+    expect(shownHash).toMatch(/^[0-9a-f]{64}$/);
+
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: `Download PDF of ${reportNumber}` }).click()]);
+    expect(download.suggestedFilename()).toBe(`${reportNumber}.pdf`);
+    pdf = readFileSync((await download.path())!);
+    expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    expect(sha256(pdf)).toBe(shownHash);
+    await page.screenshot({ path: `${shots}/certified-document.png`, fullPage: true });
+
+    // The customer's list has it too, with its state.
+    await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Documents' }).click();
+    await page.getByRole('heading', { name: 'Documents', level: 1 }).waitFor();
+    await page.getByRole('row').filter({ hasText: reportNumber }).getByText('Valid').waitFor();
+
+    // Anyone holding the file checks it without signing in.
+    const check = await browser.freshPage();
+    await check.goto(`${api.baseUrl}/verify/${reportNumber}`);
+    await check.getByRole('heading', { name: 'Check a result sheet' }).waitFor();
+    const issued = check.getByRole('region', { name: 'Issued sheet' });
+    await issued.getByText(reportNumber, { exact: true }).waitFor();
+    await issued.getByText('Valid', { exact: true }).waitFor();
+    await issued.getByText(shownHash).waitFor();
+    await check.getByLabel('Choose the PDF').setInputFiles({ name: `${reportNumber}.pdf`, mimeType: 'application/pdf', buffer: pdf });
+    await check.getByText(`Match: ${reportNumber}.pdf is exactly the issued file of ${reportNumber}.`).waitFor();
+    await check.screenshot({ path: `${shots}/certified-verify-match.png`, fullPage: true });
+
+    // One byte changed, chosen through the keyboard: focus the drop zone, Enter opens the file dialog.
+    const tampered = Buffer.from(pdf);
+    const at = Math.floor(tampered.length / 2);
+    tampered[at] = tampered[at]! ^ 0x01;
+    await check.getByRole('button', { name: /^Drop the PDF here/ }).focus();
+    const [chooser] = await Promise.all([check.waitForEvent('filechooser'), check.keyboard.press('Enter')]);
+    await chooser.setFiles({ name: 'edited.pdf', mimeType: 'application/pdf', buffer: tampered });
+    await check.getByText(`No match: edited.pdf is not the issued file of ${reportNumber}.`).waitFor();
+    await check.getByText(sha256(tampered)).waitFor();
+    await check.screenshot({ path: `${shots}/certified-verify-tampered.png`, fullPage: true });
+
+    // A number never issued says so plainly.
+    await check.getByLabel('Report number').fill('ZZ-1900-0000-R1');
+    await check.keyboard.press('Enter');
+    await check.getByText('No sheet numbered ZZ-1900-0000-R1 was issued.').waitFor();
+  }, 120_000);
+});
