@@ -72,6 +72,10 @@ import { ReviewChart, type ChartLine } from './review-chart';
     table {
       width: 100%;
     }
+    td,
+    th {
+      white-space: nowrap;
+    }
     .empty {
       padding: 16px;
     }

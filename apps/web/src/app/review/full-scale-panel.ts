@@ -17,8 +17,8 @@ import { ReviewApi } from './review-api';
 import { ReviewChart, type ChartLine } from './review-chart';
 import { dragText, powerText, reynoldsText, windDirectionText } from './summary-format';
 
-/** Road speed and wind the estimate starts from: 25 m/s (90 km/h) into a 3.13 m/s (7 mph) head wind. */
-export const DEFAULT_ROAD_CONDITION: FullScaleInput = { groundSpeed: 25, windSpeed: 3.12928, windDirection: 0 };
+/** Road speed and wind the estimate starts from: 25 m/s (90 km/h) into a 3 m/s head wind. */
+export const DEFAULT_ROAD_CONDITION: FullScaleInput = { groundSpeed: 25, windSpeed: 3, windDirection: 0 };
 
 /**
  * Summary of one run's shown version at full scale: wind-averaged C_D, drag and power at the ground speed and wind
@@ -71,7 +71,7 @@ export class FullScalePanel {
     const value = this.estimate.value();
     if (!value) return [];
     const points = value.powerByDirection.flatMap((p) => (p.power === null ? [] : [{ x: p.windDirection, y: p.power }]));
-    return [{ label: `Power at ${value.input.groundSpeed} m/s in a ${value.input.windSpeed} m/s wind`, points, kind: 'measured' }];
+    return [{ label: `Power at ${value.input.groundSpeed} m/s in a ${Number(value.input.windSpeed.toFixed(2))} m/s wind`, points, kind: 'measured' }];
   });
   /** Whether the measured yaw range left gaps in the power-against-direction chart. */
   protected readonly seriesHasGaps = computed(() => this.estimate.value()?.powerByDirection.some((p) => p.power === null) ?? false);

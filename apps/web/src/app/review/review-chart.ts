@@ -48,8 +48,13 @@ export class ReviewChart {
   readonly caption = input.required<string>();
   readonly xTitle = input.required<string>();
   readonly yTitle = input.required<string>();
-  /** Whether the x axis is logarithmic (Reynolds number). */
+  /**
+   * Whether x is a Reynolds number: tick labels in powers of ten, and a logarithmic axis once the data span more
+   * than a decade (a narrow span reads better on a linear axis).
+   */
   readonly xLog = input(false);
+  /** Whether measured points are joined in x order; off for plots where x order means nothing (C_D against Re). */
+  readonly joined = input(true);
 
   protected readonly plugins = [errorBarPlugin];
 
@@ -66,23 +71,35 @@ export class ReviewChart {
           backgroundColor: colour,
           borderWidth: line.kind === 'measured' ? 2 : 1.5,
           borderDash: line.kind === 'reference' ? [6, 4] : [],
-          pointRadius: line.kind === 'measured' ? 3 : 0,
+          pointRadius: line.kind === 'measured' ? (line.points.length > 40 ? 1.5 : 3) : 0,
+          showLine: line.kind === 'reference' || this.joined(),
         };
       }),
     };
   });
 
-  protected readonly options = computed<ChartConfiguration<'line'>['options']>(() => ({
-    responsive: true,
-    maintainAspectRatio: false,
-    animation: false,
-    parsing: { xAxisKey: 'x', yAxisKey: 'y' },
-    plugins: { legend: { display: true, position: 'bottom' } },
-    scales: {
-      x: { type: this.xLog() ? 'logarithmic' : 'linear', title: { display: true, text: this.xTitle() } },
-      y: { type: 'linear', title: { display: true, text: this.yTitle() } },
-    },
-  }));
+  protected readonly options = computed<ChartConfiguration<'line'>['options']>(() => {
+    const xs = this.lines().flatMap((line) => line.points.map((p) => p.x)).filter((x) => x > 0);
+    const [low, high] = xs.length > 0 ? [Math.min(...xs), Math.max(...xs)] : [1, 1];
+    const logarithmic = this.xLog() && high / low > 10;
+    // Enough significant figures that ticks over a narrow span still differ.
+    const digits = high > low ? Math.min(6, Math.max(2, Math.ceil(Math.log10(high / (high - low))) + 1)) : 2;
+    return {
+      responsive: true,
+      maintainAspectRatio: false,
+      animation: false,
+      parsing: { xAxisKey: 'x', yAxisKey: 'y' },
+      plugins: { legend: { display: true, position: 'bottom' } },
+      scales: {
+        x: {
+          type: logarithmic ? 'logarithmic' : 'linear',
+          title: { display: true, text: this.xTitle() },
+          ticks: this.xLog() ? { maxTicksLimit: 6, callback: (value) => Number(value).toExponential(digits) } : {},
+        },
+        y: { type: 'linear', title: { display: true, text: this.yTitle() } },
+      },
+    };
+  });
 
   /** A sentence for screen readers: what is plotted and over what range. */
   protected readonly summary = computed(() => {

@@ -32,6 +32,7 @@ interface CoefficientChart {
   readonly yTitle: string;
   readonly xTitle: string;
   readonly xLog: boolean;
+  readonly joined: boolean;
   readonly lines: ChartLine[];
 }
 
@@ -107,6 +108,8 @@ export class ReviewPage {
       yTitle: chart.yTitle,
       xTitle: chart.xTitle,
       xLog: chart.axis === 'reynoldsNumber',
+      // A yaw sweep joins up in yaw order; against Re or speed the points are shown unjoined.
+      joined: chart.axis === 'yaw',
       lines: runSeries(this.overlaid(), chart.coefficient, chart.axis).map((series) => ({ label: series.label, points: series.points, kind: 'measured' as const })),
     })),
   );

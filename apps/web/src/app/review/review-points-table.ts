@@ -95,6 +95,14 @@ import { coefficientText, reynoldsText } from './summary-format';
     table {
       width: 100%;
     }
+    td,
+    th {
+      white-space: nowrap;
+    }
+    .mat-column-notes {
+      white-space: normal;
+      min-width: 200px;
+    }
     .excluded-row :is(.mat-column-point, .mat-column-yaw, .mat-column-speed, .mat-column-re, .mat-column-cd, .mat-column-cl, .mat-column-cy, .mat-column-counts) {
       text-decoration: line-through;
       opacity: 0.55;
