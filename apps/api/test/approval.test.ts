@@ -12,10 +12,11 @@ import { FixtureBuilder, type FixtureUser } from './support/fixtures';
 import { waitForMail } from './support/mailbox';
 import { createTestApp, type TestApp } from './support/test-app';
 
-const binary = (res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) => {
+const binary = (res: request.Response, done: (err: Error | null, body: unknown) => void) => {
+  const stream = res as unknown as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => done(null, Buffer.concat(chunks)));
 };
 
 describe('approval workflow and certified sheets', () => {
