@@ -265,4 +265,66 @@ describe('certified result sheet', () => {
     await check.keyboard.press('Enter');
     await check.getByText('No sheet numbered ZZ-1900-0000-R1 was issued.').waitFor();
   }, 120_000);
+
+  it('a revision needs its reason and supersedes the sheet, which the public check then says; the lab manager reads it all in the audit trail and sees who holds a signing right', async () => {
+    expect(reportNumber).not.toBe('');
+    const technician = await browser.freshPage();
+    await signIn(technician, api.baseUrl, userOf('technician').email);
+    await openTest(technician);
+    await technician.getByRole('button', { name: 'Submit for approval' }).click();
+    await technician.getByRole('dialog').getByLabel('Note for the analyst').fill('Same run, checked again after the customer asked about the roof rails.');
+    await technician.getByRole('dialog').getByRole('button', { name: 'Submit for approval' }).click();
+    await technician.getByText('Submission 2 is waiting for approval.').waitFor();
+
+    const analyst = await browser.freshPage();
+    await signIn(analyst, api.baseUrl, userOf('analyst').email);
+    await openTest(analyst);
+    const second = analyst.getByRole('listitem', { name: 'Submission 2' });
+    await second.getByRole('button', { name: 'Send back' }).click();
+    const sendBack = analyst.getByRole('dialog');
+    await sendBack.getByLabel('Reason').fill('Too short');
+    await sendBack.getByRole('button', { name: 'Send back' }).click();
+    await sendBack.getByText('Write at least 10 characters').waitFor();
+    await sendBack.getByRole('button', { name: 'Cancel' }).click();
+    await second.getByRole('button', { name: 'Approve' }).click();
+    await analyst.getByRole('dialog').getByRole('button', { name: 'Approve' }).click();
+    await second.getByText('Approved, sheet not issued yet').waitFor();
+
+    // A lab manager issues too; the test already has a valid sheet, so the revision must say why.
+    const manager = await browser.freshPage();
+    await signIn(manager, api.baseUrl, userOf('lab_manager').email);
+    await openTest(manager);
+    await manager.getByRole('listitem', { name: 'Submission 2' }).getByRole('button', { name: 'Issue result sheet' }).click();
+    const issue = manager.getByRole('dialog');
+    await issue.getByText(`${reportNumber} will be marked superseded by the new sheet.`).waitFor();
+    await issue.getByRole('button', { name: 'Issue result sheet' }).click();
+    await issue.getByText('Say why the sheet is revised').waitFor();
+    await issue.getByLabel('Reason for the revision').fill('Roof-rail configuration label corrected on the sheet.');
+    await issue.getByRole('button', { name: 'Issue result sheet' }).click();
+    const revision = reportNumber.replace(/-R1$/, '-R2');
+    await manager.getByText(`${revision} issued and sent to the customer.`).waitFor({ timeout: 30_000 });
+    const sheets = manager.getByRole('table', { name: 'Result sheets of this test' });
+    await sheets.getByRole('row').filter({ hasText: reportNumber }).getByText(`Superseded by ${revision}`).waitFor();
+
+    const trail = manager.getByRole('table', { name: 'Audit trail of this test' });
+    await trail.getByRole('row').filter({ hasText: 'Result sheet superseded' }).getByText(/Roof-rail configuration label corrected/).waitFor();
+    await trail.getByRole('row').filter({ hasText: 'Approved' }).first().waitFor();
+    await trail.getByRole('row').filter({ hasText: 'Submitted for approval' }).first().waitFor();
+    await manager.screenshot({ path: `${shots}/certified-revision.png`, fullPage: true });
+
+    await manager.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Signing rights' }).click();
+    await manager.getByRole('heading', { name: 'Signing rights', level: 1 }).waitFor();
+    await manager.getByRole('table', { name: 'Current holders' }).getByText(userOf('analyst').name).waitFor();
+
+    // The older sheet is still genuine, but the public check says it is no longer current.
+    const check = await browser.freshPage();
+    await check.goto(`${api.baseUrl}/verify/${reportNumber}`);
+    const issued = check.getByRole('region', { name: 'Issued sheet' });
+    await issued.getByText('Superseded', { exact: true }).waitFor();
+    await issued.getByRole('link', { name: revision }).waitFor();
+    await check.getByLabel('Choose the PDF').setInputFiles({ name: `${reportNumber}.pdf`, mimeType: 'application/pdf', buffer: pdf });
+    await check.getByText(new RegExp(`superseded by ${revision}; use the newer sheet`)).waitFor();
+    await issued.getByRole('link', { name: revision }).click();
+    await check.getByRole('region', { name: 'Issued sheet' }).getByText('Valid', { exact: true }).waitFor();
+  }, 120_000);
 });
