@@ -41,7 +41,7 @@ describe('S3 raw store against s3rver on loopback', () => {
     store = createRawStore({ RAW_STORE: 's3', S3_BUCKET: 'raw-files', S3_ENDPOINT: `http://127.0.0.1:${port}`, S3_REGION: 'us-east-1', S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' }) as S3RawStore;
   });
   afterAll(async () => {
-    store?.client.destroy();
+    await store?.close();
     await server?.close();
     rmSync(directory, { recursive: true, force: true });
   });

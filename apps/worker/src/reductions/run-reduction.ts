@@ -2,20 +2,15 @@ import { applyImportProfile, parseImportProfile, parseReductionConfig, reduceRun
 import { RawFile, RawObjectMissingError, Reduction, type RawStore } from '@tunnelwright/db';
 import type { Knex } from 'knex';
 import { createHash, type Hash } from 'node:crypto';
+import { recordFailure, type ReductionFailure } from './record-failure';
 
 /** How often progress is written to the reduction row and the job, ms. */
 const progressEveryMs = 250;
-/** Points inserted per statement. */
-const pointBatch = 500;
-
-/** Why a reduction can never succeed, whatever the number of retries: bad file, bad configuration, lost bytes. */
-export interface ReductionFailure {
-  code: string;
-  message: string;
-  line: number | null;
-  column: number | null;
-  issues?: unknown[];
-}
+/**
+ * Points inserted per statement. A point's row holds its whole result as JSON (about 10 kB), and rows are
+ * made one statement at a time, so this bounds the memory the write needs whatever the number of points.
+ */
+const pointBatch = 100;
 
 /** What one attempt at a reduction ended with. */
 export type ReductionOutcome = { kind: 'done'; points: number } | { kind: 'skipped'; state: string } | { kind: 'failed'; failure: ReductionFailure };
@@ -69,32 +64,16 @@ async function* hashingRaw(input: AsyncIterable<Buffer | string>, hash: Hash): A
 /** Writes every point and marks the reduction done, in one transaction; a retry after a crash inserts nothing twice. */
 async function saveResult(knex: Knex, reduction: Reduction, result: ReductionResult): Promise<number> {
   return knex.transaction(async (trx) => {
-    const rows = result.points.map((p, index) => pointRow(reduction.id, index, p));
-    for (let i = 0; i < rows.length; i += pointBatch) {
-      await trx('reduction_points').insert(rows.slice(i, i + pointBatch)).onConflict(['reductionId', 'index']).ignore();
+    for (let i = 0; i < result.points.length; i += pointBatch) {
+      const rows = result.points.slice(i, i + pointBatch).map((p, j) => pointRow(reduction.id, i + j, p));
+      await trx('reduction_points').insert(rows).onConflict(['reductionId', 'index']).ignore();
     }
     const { points: _points, config: _config, ...summary } = result;
     await Reduction.query(trx)
       .patch({ state: 'done', progress: 1, engineVersion: result.engineVersion, warnings: result.warnings, summary: summary as unknown as Record<string, unknown>, finishedAt: new Date(), errorCode: null, errorMessage: null, errorLine: null, errorColumn: null })
       .where('id', reduction.id);
-    return rows.length;
+    return result.points.length;
   });
-}
-
-/** Records a failure that no retry can fix. */
-export async function recordFailure(knex: Knex, reductionId: string, failure: ReductionFailure): Promise<void> {
-  await Reduction.query(knex)
-    .patch({
-      state: 'failed',
-      errorCode: failure.code,
-      errorMessage: failure.message.slice(0, 4000),
-      errorLine: failure.line,
-      errorColumn: failure.column,
-      summary: failure.issues ? { issues: failure.issues } : null,
-      finishedAt: new Date(),
-    })
-    .where('id', reductionId)
-    .whereNot('state', 'done');
 }
 
 /**

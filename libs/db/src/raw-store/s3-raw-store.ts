@@ -5,8 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
-import { GetObjectCommand, HeadObjectCommand, S3Client, type S3ClientConfig } from '@aws-sdk/client-s3';
-import { Upload } from '@aws-sdk/lib-storage';
+import type { S3Client, S3ClientConfig } from '@aws-sdk/client-s3';
 import { HashingStream } from './hash-stream';
 import { RawObjectMissingError } from './raw-object-missing-error';
 import { contentKey, isContentKey, type RawStore, type StoredObject } from './raw-store';
@@ -35,9 +34,26 @@ function isNotFound(error: unknown): boolean {
  * key already exists; the spooled file is removed either way.
  */
 export class S3RawStore implements RawStore {
-  readonly client: S3Client;
+  private connected: Promise<S3Client> | undefined;
 
-  constructor(private readonly options: S3RawStoreOptions) {
+  constructor(private readonly options: S3RawStoreOptions) {}
+
+  /**
+   * The S3 client, made on first use. The SDK is loaded only then, so a process that never touches S3 (the
+   * file-system store, the worker's main thread) does not carry it in memory.
+   */
+  client(): Promise<S3Client> {
+    this.connected ??= import('@aws-sdk/client-s3').then(({ S3Client }) => new S3Client(this.clientConfig()));
+    return this.connected;
+  }
+
+  /** Closes the client's connections, if it was ever made. */
+  async close(): Promise<void> {
+    if (this.connected) (await this.connected).destroy();
+  }
+
+  private clientConfig(): S3ClientConfig {
+    const options = this.options;
     const config: S3ClientConfig = {
       region: options.region ?? 'us-east-1',
       endpoint: options.endpoint,
@@ -49,7 +65,7 @@ export class S3RawStore implements RawStore {
     if (options.accessKeyId && options.secretAccessKey) {
       config.credentials = { accessKeyId: options.accessKeyId, secretAccessKey: options.secretAccessKey };
     }
-    this.client = new S3Client(config);
+    return config;
   }
 
   async put(input: Readable | AsyncIterable<Buffer | Uint8Array> | Iterable<Buffer | Uint8Array>): Promise<StoredObject> {
@@ -62,7 +78,8 @@ export class S3RawStore implements RawStore {
       const sha256 = hashing.digest();
       const key = contentKey(sha256);
       if (!(await this.exists(key))) {
-        await new Upload({ client: this.client, params: { Bucket: this.options.bucket, Key: key, Body: createReadStream(spool), ContentLength: hashing.size } }).done();
+        const { Upload } = await import('@aws-sdk/lib-storage');
+        await new Upload({ client: await this.client(), params: { Bucket: this.options.bucket, Key: key, Body: createReadStream(spool), ContentLength: hashing.size } }).done();
       }
       return { sha256, size: hashing.size, key };
     } finally {
@@ -73,7 +90,8 @@ export class S3RawStore implements RawStore {
   async get(key: string): Promise<Readable> {
     if (!isContentKey(key)) throw new RawObjectMissingError(key);
     try {
-      const answer = await this.client.send(new GetObjectCommand({ Bucket: this.options.bucket, Key: key }));
+      const { GetObjectCommand } = await import('@aws-sdk/client-s3');
+      const answer = await (await this.client()).send(new GetObjectCommand({ Bucket: this.options.bucket, Key: key }));
       return answer.Body as Readable;
     } catch (error) {
       if (isNotFound(error)) throw new RawObjectMissingError(key);
@@ -84,7 +102,8 @@ export class S3RawStore implements RawStore {
   async exists(key: string): Promise<boolean> {
     if (!isContentKey(key)) return false;
     try {
-      await this.client.send(new HeadObjectCommand({ Bucket: this.options.bucket, Key: key }));
+      const { HeadObjectCommand } = await import('@aws-sdk/client-s3');
+      await (await this.client()).send(new HeadObjectCommand({ Bucket: this.options.bucket, Key: key }));
       return true;
     } catch (error) {
       if (isNotFound(error)) return false;
