@@ -21,7 +21,7 @@ const workerLog = '/tmp/tw-e2e-certified-worker.log';
 
 function userOf(role: 'technician' | 'analyst' | 'lab_manager' | 'customer') {
   const user = role === 'customer' ? demoUsers.find((candidate) => candidate.organisation === demoCustomers.quillfen) : demoUsers.find((candidate) => candidate.role === role);
-  if (!user) throw new Error(`The demo seed has no ${role}`);
+  if (!user) throw new Error(`The demo data has no ${role}`);
   return user;
 }
 
@@ -54,7 +54,7 @@ async function openDemoTest(): Promise<void> {
     const customer = await Organisation.query(knex).findOne({ name: demoCustomers.quillfen });
     const manager = await User.query(knex).findOne({ email: userOf('lab_manager').email });
     const tunnel = await Tunnel.query(knex).findOne({ kind: 'closed' });
-    if (!customer || !manager || !tunnel) throw new Error('The demo seed lacks the customer, lab manager or closed tunnel');
+    if (!customer || !manager || !tunnel) throw new Error('The demo data lacks the customer, lab manager or closed tunnel');
     const article = await TestArticle.query(knex).insert({
       organisationId: customer.id,
       name: 'Hatchback model with roof rails, 1:4 (invented)',
