@@ -5,8 +5,8 @@ import { certifiedTitle } from './approval';
 import { demoCustomers } from './demo-users';
 import { demoPlans } from './plans';
 
-/** Quillfen's demo plan, compared with its own estate-car test's valid sheet. */
-const linkedPlan = demoPlans.find((plan) => plan.organisation === demoCustomers.quillfen);
+/** Quillfen's estate-car plan, compared with its own estate-car test's valid sheet. */
+const linkedPlan = demoPlans.find((plan) => plan.organisation === demoCustomers.quillfen && plan.name === 'Estate car, full-size estimate');
 
 /**
  * Links Quillfen's demo plan to the valid sheet of its estate-car test (revision 2, after revision 1 was

@@ -11,7 +11,7 @@ interface DemoPlan {
   input: Omit<PlanInputDraft, 'tunnelId'>;
 }
 
-/** Two invented plans, one for each demo customer, against the closed-section tunnel. */
+/** Three invented plans against the closed-section tunnel: two for Quillfen (one later compared with its certified estate-car test), one for Tarnwick. */
 export const demoPlans: DemoPlan[] = [
   {
     name: 'Inspection trolley with rider',
@@ -30,6 +30,25 @@ export const demoPlans: DemoPlan[] = [
       interferenceFactor: 1.1,
       fullScale: { groundSpeed: 6, windSpeed: 4, windDirection: 0, seriesMaxWind: 5 },
       duration: { points: 90, dwellSeconds: 30, configurationChanges: 3, changeMinutes: 20, setupMinutes: 90 },
+    },
+  },
+  {
+    name: 'Estate car, full-size estimate',
+    organisation: demoCustomers.quillfen,
+    tunnel: 'Tunnel 1 — closed section',
+    input: {
+      parts: [
+        { type: 'custom', label: 'Body, smooth underfloor', dragArea: 0.55, frontalArea: 2.2, count: 1 },
+        { type: 'custom', label: 'Door mirror', dragArea: 0.015, frontalArea: 0.04, count: 2 },
+        { type: 'custom', label: 'Wheel and arch', dragArea: 0.012, frontalArea: 0.09, count: 4 },
+      ],
+      speeds: [30, 40, 50],
+      scale: 0.25,
+      dragCapacity: 400,
+      yawMargin: 0.25,
+      interferenceFactor: 1,
+      fullScale: { groundSpeed: 30, windSpeed: 3, windDirection: 0, seriesMaxWind: 8 },
+      duration: { points: 60, dwellSeconds: 30, configurationChanges: 2, changeMinutes: 20, setupMinutes: 90 },
     },
   },
   {

@@ -51,7 +51,7 @@ describe('scripts/seed.ts', () => {
 
       // Quillfen's demo plan is compared with the valid revision, R2, not the superseded R1.
       const r2 = sheets[1]!;
-      const plan = await t.knex('plans').join('organisations', 'organisations.id', 'plans.organisationId').where({ 'organisations.name': demoCustomers.quillfen, 'plans.name': 'Inspection trolley with rider' }).first('plans.*');
+      const plan = await t.knex('plans').join('organisations', 'organisations.id', 'plans.organisationId').where({ 'organisations.name': demoCustomers.quillfen, 'plans.name': 'Estate car, full-size estimate' }).first('plans.*');
       expect(plan.measuredSheetId).toBe(r2.id);
       expect(plan.measuredConfigurationCode).toBe('A');
       // Read back from what the sheet states: configuration A's point nearest 0° yaw, C_D·S × scale² (similar figures, definition).

@@ -4,7 +4,7 @@ import { startApiServer, type ApiServer } from './support/api-server';
 import { launchBrowser, type TestBrowser } from './support/browser';
 import { signIn } from './support/sign-in';
 
-const plan = 'Inspection trolley with rider';
+const plan = 'Estate car, full-size estimate';
 const caution = 'Planning estimate only, not a design value';
 
 async function openPlan(page: Page, baseUrl: string, email: string): Promise<void> {
