@@ -1,22 +1,19 @@
 import { createKnex } from '@tunnelwright/db';
 import { Redis } from 'ioredis';
-import { createApp } from './app';
 import { loadConfig } from './config';
 import { createSmtpMailer } from './mail/mailer';
+import { startApi } from './start-api';
 
 const config = loadConfig();
 const knex = createKnex(config.databaseUrl);
 const redis = new Redis(config.redisUrl, { maxRetriesPerRequest: 3, lazyConnect: false });
 const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
-const app = createApp({ config, knex, redis, mailer });
-
-const server = app.listen(config.port, () => {
-  console.log(`Tunnelwright API listening on port ${config.port} (public URL ${config.publicUrl}${config.demoMode ? ', demo mode' : ''})`);
-});
+const api = await startApi({ config, knex, redis, mailer });
+console.log(`Tunnelwright API listening on port ${api.port} (public URL ${config.publicUrl}${config.demoMode ? ', demo mode' : ''})`);
 
 function shutdown(signal: string): void {
   console.log(`${signal} received, closing`);
-  server.close(() => {
+  api.close().finally(() => {
     mailer.close();
     Promise.allSettled([knex.destroy(), redis.quit()]).then(() => process.exit(0));
   });

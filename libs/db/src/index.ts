@@ -21,6 +21,7 @@ export { Reduction } from './models/reduction';
 export { ReductionPoint } from './models/reduction-point';
 export { OutboxMessage } from './models/outbox-message';
 export { dispatchOutbox, type OutboxSender } from './outbox';
+export { dispatchReductionOutbox, startReductionOutboxDispatcher, type DispatchLogger, type RunningOutboxDispatcher } from './reduction-outbox';
 export * from './raw-store';
 export { reductionQueue, queuePrefix, reductionOutboxQueue } from './reduction-jobs';
 export { Plan } from './models/plan';

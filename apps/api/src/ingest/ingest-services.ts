@@ -1,6 +1,6 @@
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { createRawStore, dispatchOutbox, queuePrefix, reductionOutboxQueue, reductionQueue, type RawStore } from '@tunnelwright/db';
+import { createRawStore, dispatchReductionOutbox, queuePrefix, reductionQueue, type RawStore } from '@tunnelwright/db';
 import { Queue } from 'bullmq';
 import type { AppDeps } from '../deps';
 
@@ -38,15 +38,7 @@ export function ingestServices(deps: AppDeps, env: NodeJS.ProcessEnv = process.e
     reductionQueue: queue,
     uploadLimitBytes: uploadLimit(env),
     uploadDir: env.UPLOAD_TMP_DIR ?? join(tmpdir(), 'tunnelwright-uploads'),
-    dispatch: (ids) =>
-      dispatchOutbox(
-        deps.knex,
-        reductionOutboxQueue(queuePrefix(env)),
-        async (message) => {
-          await queue.add(message.jobName, message.payload, { ...reductionQueue.jobOptions, jobId: message.jobId });
-        },
-        { ids },
-      ),
+    dispatch: (ids) => dispatchReductionOutbox(deps.knex, queue, { prefix: queuePrefix(env), ids }),
   };
   services.set(deps, created);
   return created;

@@ -1,4 +1,4 @@
-import { createKnex, dispatchOutbox, queuePrefix, reductionOutboxQueue, reductionQueue } from '@tunnelwright/db';
+import { createKnex, queuePrefix, reductionQueue, startReductionOutboxDispatcher } from '@tunnelwright/db';
 import { Queue, Worker } from 'bullmq';
 import { Redis } from 'ioredis';
 import type { Logger } from 'pino';
@@ -45,16 +45,7 @@ export async function startReductionWorker(options: ReductionWorkerOptions): Pro
   const queue = new Queue(reductionQueue.name, { connection, prefix });
   const lockDuration = options.lockDurationMs ?? Number(process.env.REDUCTION_LOCK_MS ?? 30_000);
 
-  const dispatch = async () => {
-    const sent = await dispatchOutbox(knex, reductionOutboxQueue(prefix), async (message) => {
-      await queue.add(message.jobName, message.payload, { ...reductionQueue.jobOptions, jobId: message.jobId });
-    });
-    if (sent > 0) logger.info({ sent }, 'outbox messages dispatched');
-  };
-  await dispatch();
-  const dispatcher = setInterval(() => {
-    dispatch().catch((error: unknown) => logger.error({ err: error }, 'outbox dispatch failed'));
-  }, options.dispatchEveryMs ?? 5000);
+  const dispatcher = await startReductionOutboxDispatcher(knex, queue, { prefix, everyMs: options.dispatchEveryMs ?? 5000, logger, failOnStart: true });
 
   const processorFile = await buildReductionProcessor();
   const worker = new Worker(reductionQueue.name, processorFile, {
@@ -88,7 +79,7 @@ export async function startReductionWorker(options: ReductionWorkerOptions): Pro
     queue,
     worker,
     async close() {
-      clearInterval(dispatcher);
+      await dispatcher.stop();
       await worker.close();
       await queue.close();
       await knex.destroy();
