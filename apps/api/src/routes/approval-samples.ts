@@ -2,8 +2,9 @@ import { readFileSync } from 'node:fs';
 import { Readable } from 'node:stream';
 import { fileURLToPath } from 'node:url';
 import { parseReductionConfig, reduceRun, type ReductionResult } from '@tunnelwright/aero';
-import { createRawStore, Organisation, RawFile, Reduction, ReductionPoint, Run, SigningRight, Submission, User } from '@tunnelwright/db';
+import { createRawStore, Organisation, RawFile, Reduction, Run, SigningRight, Submission, User } from '@tunnelwright/db';
 import { issueSheet } from '../approval/workflow';
+import { storeEngineReduction } from './engine-reduction-samples';
 import type { SampleFixtures } from './route';
 import { sampleTestId } from './ingest-samples';
 
@@ -49,44 +50,7 @@ export async function sampleReducedRun(f: SampleFixtures, testId?: string, uploa
   const stored = await createRawStore().put([bytes]);
   const file = await RawFile.query().insert({ runId: run.id, originalName: 'closed-car-yaw-sweep.csv', size: stored.size, sha256: stored.sha256, storageKey: stored.key, uploadedBy: technician.id });
   const result = await exampleReduction();
-  const { points, config, ...summary } = result;
-  const reduction = await Reduction.query().insert({
-    runId: run.id,
-    rawFileId: file.id,
-    version: 1,
-    engineVersion: result.engineVersion,
-    config: config as unknown as Record<string, unknown>,
-    calibrationId: null,
-    overrideId: null,
-    state: 'done',
-    progress: 1,
-    inputSha256: stored.sha256,
-    warnings: result.warnings,
-    summary: summary as unknown as Record<string, unknown>,
-    createdBy: technician.id,
-    startedAt: new Date(),
-    finishedAt: new Date(),
-  });
-  await ReductionPoint.query().insert(
-    points.map((p, index) => ({
-      reductionId: reduction.id,
-      index,
-      pointNumber: p.point,
-      sampleCount: p.sampleCount,
-      yaw: p.yaw,
-      pitch: p.pitch,
-      dynamicPressure: p.correctedDynamicPressure,
-      speed: p.correctedSpeed,
-      reynoldsNumber: p.reynoldsNumber,
-      cdUncorrected: p.uncorrected.dragCoefficient.value,
-      cdCorrected: p.corrected.dragCoefficient.value,
-      clCorrected: p.corrected.liftCoefficient.value,
-      csCorrected: p.corrected.sideForceCoefficient.value,
-      dragCounts: p.dragCounts,
-      setpoints: { yaw: p.yaw, pitch: p.pitch },
-      result: p as unknown as Record<string, unknown>,
-    })),
-  );
+  const reduction = await storeEngineReduction({ runId: run.id, rawFileId: file.id, inputSha256: stored.sha256, createdBy: technician.id }, result);
   return { testId: test, runId: run.id, reductionId: reduction.id, uploaderId: technician.id };
 }
 

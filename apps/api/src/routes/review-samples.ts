@@ -1,5 +1,6 @@
 import { parseReductionConfig, reduceRun } from '@tunnelwright/aero';
-import { RawFile, Reduction, ReductionPoint, Run } from '@tunnelwright/db';
+import { RawFile, Reduction, Run } from '@tunnelwright/db';
+import { storeEngineReduction } from './engine-reduction-samples';
 import { sampleRunFile, sampleRunId } from './ingest-samples';
 import type { SampleFixtures } from './route';
 
@@ -21,44 +22,7 @@ export async function sampleEngineReductionId(f: SampleFixtures): Promise<string
   if (!run || !rawFile) throw new Error('sample run missing');
   const config = parseReductionConfig(sampleConfig, 'sample configuration');
   const result = await reduceRun([Buffer.from(sampleRunFile)], config, { fileName: rawFile.originalName });
-  const { points, config: _config, ...summary } = result;
-  const reduction = await Reduction.query().insert({
-    runId,
-    rawFileId: rawFile.id,
-    version: 1,
-    engineVersion: result.engineVersion,
-    config: config as unknown as Record<string, unknown>,
-    calibrationId: null,
-    overrideId: null,
-    state: 'done',
-    progress: 1,
-    inputSha256: rawFile.sha256,
-    warnings: result.warnings,
-    summary: summary as unknown as Record<string, unknown>,
-    createdBy: run.createdBy,
-    startedAt: new Date(),
-    finishedAt: new Date(),
-  });
-  for (const [index, p] of points.entries()) {
-    await ReductionPoint.query().insert({
-      reductionId: reduction.id,
-      index,
-      pointNumber: p.point,
-      sampleCount: p.sampleCount,
-      yaw: p.yaw,
-      pitch: p.pitch,
-      dynamicPressure: p.correctedDynamicPressure,
-      speed: p.correctedSpeed,
-      reynoldsNumber: p.reynoldsNumber,
-      cdUncorrected: p.uncorrected.dragCoefficient.value,
-      cdCorrected: p.corrected.dragCoefficient.value,
-      clCorrected: p.corrected.liftCoefficient.value,
-      csCorrected: p.corrected.sideForceCoefficient.value,
-      dragCounts: p.dragCounts,
-      setpoints: { yaw: p.yaw, pitch: p.pitch },
-      result: p as unknown as Record<string, unknown>,
-    });
-  }
+  const reduction = await storeEngineReduction({ runId, rawFileId: rawFile.id, inputSha256: rawFile.sha256, createdBy: run.createdBy }, result);
   return reduction.id;
 }
 
