@@ -1,5 +1,5 @@
-import { createHash, randomUUID } from 'node:crypto';
-import { access, mkdir, rename, writeFile } from 'node:fs/promises';
+import { rmSync } from 'node:fs';
+import { access, lstat, mkdtemp, readdir, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -25,6 +25,27 @@ const packagesByAbsolutePath: Plugin = {
   },
 };
 
+/** Whether process `pid` is still running. */
+function alive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (error) {
+    return (error as NodeJS.ErrnoException).code === 'EPERM';
+  }
+}
+
+/** Removes the bundle folders of this user's workers that died without cleaning up (SIGKILL, a crash). */
+async function removeLeftovers(): Promise<void> {
+  for (const name of await readdir(tmpdir())) {
+    const pid = Number(/^tunnelwright-worker-(\d+)-/.exec(name)?.[1]);
+    if (!pid || pid === process.pid || alive(pid)) continue;
+    const path = join(tmpdir(), name);
+    const stats = await lstat(path).catch(() => undefined);
+    if (stats?.isDirectory() && stats.uid === process.getuid?.()) await rm(path, { recursive: true, force: true }).catch(() => undefined);
+  }
+}
+
 async function exists(path: string): Promise<boolean> {
   return access(path).then(
     () => true,
@@ -48,15 +69,13 @@ async function bundle(): Promise<string> {
     });
     const code = result.outputFiles[0]?.contents;
     if (!code) throw new Error(`esbuild wrote nothing for ${entry}`);
-    const dir = join(tmpdir(), 'tunnelwright-worker');
-    // Named by content: workers started from the same sources share one file, and a half-written file is never seen.
-    const file = join(dir, `reduction-processor-${createHash('sha256').update(code).digest('hex').slice(0, 16)}.mjs`);
-    if (!(await exists(file))) {
-      await mkdir(dir, { recursive: true });
-      const partial = `${file}.${randomUUID()}.part`;
-      await writeFile(partial, code);
-      await rename(partial, file);
-    }
+    await removeLeftovers();
+    // A folder of this process's own, readable by its user alone: the thread runs whatever code is found
+    // there, so it must never be a file someone else could have put at a name known in advance.
+    const dir = await mkdtemp(join(tmpdir(), `tunnelwright-worker-${process.pid}-`));
+    process.once('exit', () => rmSync(dir, { recursive: true, force: true }));
+    const file = join(dir, 'reduction-processor.mjs');
+    await writeFile(file, code, { mode: 0o600 });
     return file;
   } finally {
     // esbuild's service process has done its work; it would only hold memory beside the worker.
