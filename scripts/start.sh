@@ -75,16 +75,11 @@ cat <<BANNER
   Tunnelwright is running: $PUBLIC_URL
   Demo mode is on: e-mail goes to the local SMTP fake and shows in the dev mailbox (.data/mail).
 
-  Demo sign-ins, one per role:
+  Demo sign-ins (a customer of each of the two firms):
 BANNER
 node --import tsx -e "
   const { demoUsers, demoPassword } = await import('./scripts/seed/demo-users.ts');
-  const seen = new Set();
-  for (const user of demoUsers) {
-    if (seen.has(user.role)) continue;
-    seen.add(user.role);
-    console.log('    ' + user.role.padEnd(12) + user.email.padEnd(34) + demoPassword);
-  }
+  for (const user of demoUsers) console.log('    ' + user.role.padEnd(12) + user.email.padEnd(34) + demoPassword);
 "
 cat <<'BANNER'
 
