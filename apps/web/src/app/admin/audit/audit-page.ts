@@ -64,7 +64,23 @@ export class AuditPage {
   private readonly api = inject(AuditApi);
 
   protected readonly columns = ['createdAt', 'actor', 'action', 'entity', 'details'];
-  protected readonly entities = ['', 'user', 'invitation', 'tunnel', 'service'];
+  /** The kinds of record the trail can be filtered by, with their names in the menu ('' for everything). */
+  protected readonly entities: readonly { value: string; label: string }[] = [
+    { value: '', label: 'Everything' },
+    { value: 'test', label: 'Tests: runs judged, submissions, approvals and sheets' },
+    { value: 'booking', label: 'Bookings' },
+    { value: 'maintenance_block', label: 'Maintenance blocks' },
+    { value: 'plan', label: 'Plans' },
+    { value: 'run', label: 'Runs' },
+    { value: 'article', label: 'Test articles' },
+    { value: 'balance', label: 'Balances and calibrations' },
+    { value: 'import_profile', label: 'Import profiles' },
+    { value: 'user', label: 'Users and signing rights' },
+    { value: 'invitation', label: 'Invitations' },
+    { value: 'organisation', label: 'Organisations' },
+    { value: 'tunnel', label: 'Tunnels' },
+    { value: 'service', label: 'Services' },
+  ];
   protected readonly query = signal<AuditQuery>({ entity: '', page: 1, pageSize: 25 });
   protected readonly entries = rxResource({ params: () => this.query(), stream: ({ params }) => this.api.list(params) });
   protected readonly rows = computed(() => (this.entries.hasValue() ? this.entries.value().items : []));
