@@ -8,33 +8,21 @@ import type { Booking } from '@tunnelwright/contracts';
 import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { BookingApi } from './booking-api';
-import { formatPeriod, labInstant, localValueOf } from './lab-time';
+import { formatPeriod, localValueOf } from './lab-time';
+import { PeriodFields, periodControls, readPeriod } from './period-fields';
 
 /** A lab manager offers another period instead of the one asked for; times are the lab's wall time. */
 @Component({
   selector: 'tw-counter-proposal-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule, ErrorBanner],
+  imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule, ErrorBanner, PeriodFields],
   template: `
     <h2 mat-dialog-title>Offer another period</h2>
     <mat-dialog-content>
       <p>Asked for: {{ asked }}</p>
       <p>Times below are in the lab's zone, {{ booking.timeZone }}.</p>
       <form [formGroup]="form" class="fields">
-        <mat-form-field>
-          <mat-label>Start</mat-label>
-          <input matInput type="datetime-local" formControlName="start" required />
-          @if (form.controls.start.invalid) {
-            <mat-error>Choose the start</mat-error>
-          }
-        </mat-form-field>
-        <mat-form-field>
-          <mat-label>End</mat-label>
-          <input matInput type="datetime-local" formControlName="end" required />
-          @if (form.controls.end.invalid) {
-            <mat-error>Choose the end</mat-error>
-          }
-        </mat-form-field>
+        <tw-period-fields [controls]="form.controls" />
         <mat-form-field class="wide">
           <mat-label>Note to the customer</mat-label>
           <textarea matInput formControlName="note" rows="2" maxlength="2000"></textarea>
@@ -52,19 +40,7 @@ import { formatPeriod, labInstant, localValueOf } from './lab-time';
       <button mat-flat-button type="button" [disabled]="sending()" (click)="send()">Offer this period</button>
     </mat-dialog-actions>
   `,
-  styles: `
-    .fields {
-      display: flex;
-      flex-wrap: wrap;
-      gap: 12px;
-    }
-    .wide {
-      width: 100%;
-    }
-    .error {
-      color: var(--mat-sys-error);
-    }
-  `,
+  styleUrl: './period-dialog.scss',
 })
 export class CounterProposalDialog {
   private readonly api = inject(BookingApi);
@@ -73,8 +49,7 @@ export class CounterProposalDialog {
 
   protected readonly asked = formatPeriod(this.booking.period, this.booking.timeZone);
   protected readonly form = new FormGroup({
-    start: new FormControl(localValueOf(this.booking.period.start, this.booking.timeZone), { nonNullable: true, validators: Validators.required }),
-    end: new FormControl(localValueOf(this.booking.period.end, this.booking.timeZone), { nonNullable: true, validators: Validators.required }),
+    ...periodControls(localValueOf(this.booking.period.start, this.booking.timeZone), localValueOf(this.booking.period.end, this.booking.timeZone)),
     note: new FormControl('', { nonNullable: true, validators: Validators.maxLength(2000) }),
   });
   protected readonly orderError = signal(false);
@@ -82,16 +57,14 @@ export class CounterProposalDialog {
   protected readonly sendError = signal<string | null>(null);
 
   protected send(): void {
-    const { start, end, note } = this.form.getRawValue();
-    const from = labInstant(start, this.booking.timeZone);
-    const to = labInstant(end, this.booking.timeZone);
-    this.orderError.set(Boolean(from && to && Date.parse(to) <= Date.parse(from)));
-    if (this.form.invalid || !from || !to || this.orderError()) {
+    const { period, outOfOrder } = readPeriod(this.form.controls, this.booking.timeZone);
+    this.orderError.set(outOfOrder);
+    if (this.form.invalid || !period || outOfOrder) {
       this.form.markAllAsTouched();
       return;
     }
     this.sending.set(true);
-    this.api.counterPropose(this.booking.id, { start: from, end: to }, note.trim()).subscribe({
+    this.api.counterPropose(this.booking.id, period, this.form.controls.note.value.trim()).subscribe({
       next: (booking) => this.dialogRef.close(booking),
       error: (error: unknown) => {
         this.sending.set(false);

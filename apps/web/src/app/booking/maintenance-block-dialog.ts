@@ -10,7 +10,8 @@ import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { BookingApi } from './booking-api';
 import { CalendarLane, type FreeSlot } from './calendar-grid';
-import { labInstant, localValueOf } from './lab-time';
+import { localValueOf } from './lab-time';
+import { PeriodFields, periodControls, readPeriod } from './period-fields';
 
 /** What the maintenance dialog needs: the tunnels and the lab's zone. */
 export interface MaintenanceBlockDialogData {
@@ -24,7 +25,7 @@ export interface MaintenanceBlockDialogData {
 @Component({
   selector: 'tw-maintenance-block-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ErrorBanner],
+  imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ErrorBanner, PeriodFields],
   template: `
     <h2 mat-dialog-title>Block a tunnel for maintenance</h2>
     <mat-dialog-content>
@@ -41,20 +42,7 @@ export interface MaintenanceBlockDialogData {
             <mat-error>Choose a tunnel</mat-error>
           }
         </mat-form-field>
-        <mat-form-field>
-          <mat-label>Start</mat-label>
-          <input matInput type="datetime-local" formControlName="start" required />
-          @if (form.controls.start.invalid) {
-            <mat-error>Choose the start</mat-error>
-          }
-        </mat-form-field>
-        <mat-form-field>
-          <mat-label>End</mat-label>
-          <input matInput type="datetime-local" formControlName="end" required />
-          @if (form.controls.end.invalid) {
-            <mat-error>Choose the end</mat-error>
-          }
-        </mat-form-field>
+        <tw-period-fields [controls]="form.controls" />
         <mat-form-field class="wide">
           <mat-label>What is the maintenance?</mat-label>
           <textarea matInput formControlName="reason" rows="2" maxlength="2000" required></textarea>
@@ -75,19 +63,7 @@ export interface MaintenanceBlockDialogData {
       <button mat-flat-button type="button" [disabled]="sending()" (click)="save()">Block the tunnel</button>
     </mat-dialog-actions>
   `,
-  styles: `
-    .fields {
-      display: flex;
-      flex-wrap: wrap;
-      gap: 12px;
-    }
-    .wide {
-      width: 100%;
-    }
-    .error {
-      color: var(--mat-sys-error);
-    }
-  `,
+  styleUrl: './period-dialog.scss',
 })
 export class MaintenanceBlockDialog {
   private readonly api = inject(BookingApi);
@@ -97,8 +73,7 @@ export class MaintenanceBlockDialog {
   private readonly slot = this.data.slot;
   protected readonly form = new FormGroup({
     tunnelId: new FormControl<string | null>(this.slot?.laneId ?? null, Validators.required),
-    start: new FormControl(this.slot ? localValueOf(this.slot.start, this.data.timeZone) : '', { nonNullable: true, validators: Validators.required }),
-    end: new FormControl(this.slot ? localValueOf(this.slot.end, this.data.timeZone) : '', { nonNullable: true, validators: Validators.required }),
+    ...periodControls(this.slot ? localValueOf(this.slot.start, this.data.timeZone) : '', this.slot ? localValueOf(this.slot.end, this.data.timeZone) : ''),
     reason: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(2000)] }),
   });
   protected readonly orderError = signal(false);
@@ -106,17 +81,16 @@ export class MaintenanceBlockDialog {
   protected readonly sendError = signal<string | null>(null);
 
   protected save(): void {
-    const { tunnelId, start, end, reason } = this.form.getRawValue();
-    const from = labInstant(start, this.data.timeZone);
-    const to = labInstant(end, this.data.timeZone);
-    this.orderError.set(Boolean(from && to && Date.parse(to) <= Date.parse(from)));
-    if (this.form.invalid || !tunnelId || !from || !to || this.orderError()) {
+    const { tunnelId, reason } = this.form.getRawValue();
+    const { period, outOfOrder } = readPeriod(this.form.controls, this.data.timeZone);
+    this.orderError.set(outOfOrder);
+    if (this.form.invalid || !tunnelId || !period || outOfOrder) {
       this.form.markAllAsTouched();
       return;
     }
     this.sending.set(true);
     this.sendError.set(null);
-    this.api.createMaintenanceBlock({ tunnelId, start: from, end: to, reason: reason.trim() }).subscribe({
+    this.api.createMaintenanceBlock({ tunnelId, ...period, reason: reason.trim() }).subscribe({
       next: (block) => this.dialogRef.close(block),
       error: (error: unknown) => {
         this.sending.set(false);
