@@ -1,5 +1,5 @@
 import { HttpEventType, provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
 import { HarnessLoader } from '@angular/cdk/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
@@ -43,18 +43,23 @@ async function open(options: { planId?: string; plans?: PlanSummary[]; planHours
   return { fixture, loader: TestbedHarnessEnvironment.loader(fixture), backend };
 }
 
+/** Waits for the page to ask for the tunnel's week of occupancy, and returns that request unanswered. */
+async function occupancyRequest(backend: HttpTestingController): Promise<TestRequest> {
+  let pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
+  while (pending.length === 0) {
+    await new Promise((done) => setTimeout(done, 20));
+    pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
+  }
+  return pending[0]!;
+}
+
 /** Chooses the tunnel and answers the week's occupancy request the choice starts; returns that request's range. */
 async function chooseTunnel(loader: HarnessLoader, backend: HttpTestingController, slots: (from: string) => unknown[] = () => []): Promise<void> {
   const tunnel = await (await loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: /^Tunnel/ }))).getControl(MatSelectHarness);
   await tunnel?.open();
   // The harness waits for the page to settle, which includes the week's pending occupancy request.
   const choosing = tunnel?.clickOptions({ text: 'Low-speed circuit' });
-  let pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
-  while (pending.length === 0) {
-    await new Promise((done) => setTimeout(done, 20));
-    pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
-  }
-  const week = pending[0]!;
+  const week = await occupancyRequest(backend);
   const from = week.request.params.get('from') ?? '';
   week.flush({ tunnelId, timeZone: 'Europe/London', from, to: from, slots: slots(from) });
   await choosing;
@@ -63,13 +68,9 @@ async function chooseTunnel(loader: HarnessLoader, backend: HttpTestingControlle
 /** Moves the tunnel's week on by one and answers the occupancy request that starts, with nothing booked. */
 async function nextWeek(loader: HarnessLoader, backend: HttpTestingController): Promise<void> {
   const moving = (await loader.getHarness(MatButtonHarness.with({ selector: '[aria-label="Next week"]' }))).click();
-  let pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
-  while (pending.length === 0) {
-    await new Promise((done) => setTimeout(done, 20));
-    pending = backend.match((request) => request.url === `/api/tunnels/${tunnelId}/occupancy`);
-  }
-  const from = pending[0]!.request.params.get('from') ?? '';
-  pending[0]!.flush({ tunnelId, timeZone: 'Europe/London', from, to: from, slots: [] });
+  const week = await occupancyRequest(backend);
+  const from = week.request.params.get('from') ?? '';
+  week.flush({ tunnelId, timeZone: 'Europe/London', from, to: from, slots: [] });
   await moving;
 }
 
@@ -78,6 +79,18 @@ const nextMondayAt = (days: number, time: string) => `${DateTime.now().setZone('
 
 const field = (loader: HarnessLoader, label: RegExp) => loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: label }));
 const input = async (loader: HarnessLoader, label: RegExp) => (await (await field(loader, label)).getControl(MatInputHarness)) as MatInputHarness;
+/** Names the one article and bases its coefficients on the frontal area. */
+async function nameArticle(loader: HarnessLoader, name: string): Promise<void> {
+  await (await input(loader, /^Article name/)).setValue(name);
+  const kind = await (await field(loader, /^Coefficients based on/)).getControl(MatSelectHarness);
+  await kind?.open();
+  await kind?.clickOptions({ text: 'Frontal area' });
+}
+/** Types the period into the Start and End fields, as `datetime-local` values. */
+async function setPeriod(loader: HarnessLoader, start: string, end: string): Promise<void> {
+  await (await input(loader, /^Start/)).setValue(start);
+  await (await input(loader, /^End/)).setValue(end);
+}
 const send = async (loader: HarnessLoader) => (await loader.getHarness(MatButtonHarness.with({ text: 'Send request' }))).click();
 
 describe('BookingRequestPage', () => {
@@ -112,12 +125,8 @@ describe('BookingRequestPage', () => {
     });
     await fixture.whenStable();
     expect((fixture.nativeElement as HTMLElement).querySelector('tw-calendar-grid')?.textContent).toContain('Busy');
-    await (await input(loader, /^Start/)).setValue('2030-10-07T09:00');
-    await (await input(loader, /^End/)).setValue('2030-10-07T17:00');
-    await (await input(loader, /^Article name/)).setValue('Hatchback model, 1:4');
-    const kind = await (await field(loader, /^Coefficients based on/)).getControl(MatSelectHarness);
-    await kind?.open();
-    await kind?.clickOptions({ text: 'Frontal area' });
+    await setPeriod(loader, '2030-10-07T09:00', '2030-10-07T17:00');
+    await nameArticle(loader, 'Hatchback model, 1:4');
     await (await input(loader, /^Speeds/)).setValue('20, 30 40');
     await (await input(loader, /^Yaw from/)).setValue('-10');
     await (await input(loader, /^Yaw to/)).setValue('10');
@@ -143,10 +152,7 @@ describe('BookingRequestPage', () => {
     await (await input(loader, /^Start/)).setValue('2030-10-07T09:00');
     expect(await (await input(loader, /^End/)).getValue()).toBe('2030-10-07T12:30');
     await chooseTunnel(loader, backend);
-    await (await input(loader, /^Article name/)).setValue('Trailer, 1:5');
-    const kind = await (await field(loader, /^Coefficients based on/)).getControl(MatSelectHarness);
-    await kind?.open();
-    await kind?.clickOptions({ text: 'Frontal area' });
+    await nameArticle(loader, 'Trailer, 1:5');
     await send(loader);
     expect(backend.expectOne('/api/bookings').request.body).toMatchObject({ planId, start: '2030-10-07T09:00:00+01:00', end: '2030-10-07T12:30:00+01:00' });
   }, 20_000);
@@ -168,12 +174,8 @@ describe('BookingRequestPage', () => {
     expect(await loader.getAllHarnesses(MatButtonHarness.with({ selector: '[aria-label="Remove notes.docx"]' }))).toEqual([]);
 
     await chooseTunnel(loader, backend);
-    await (await input(loader, /^Start/)).setValue('2030-10-07T09:00');
-    await (await input(loader, /^End/)).setValue('2030-10-07T17:00');
-    await (await input(loader, /^Article name/)).setValue('Trailer, 1:5');
-    const kind = await (await field(loader, /^Coefficients based on/)).getControl(MatSelectHarness);
-    await kind?.open();
-    await kind?.clickOptions({ text: 'Frontal area' });
+    await setPeriod(loader, '2030-10-07T09:00', '2030-10-07T17:00');
+    await nameArticle(loader, 'Trailer, 1:5');
     await send(loader);
     backend.expectOne('/api/bookings').flush({ id: bookingId, tunnelName: 'Low-speed circuit' });
     const upload = backend.expectOne(`/api/bookings/${bookingId}/attachments`);
@@ -191,12 +193,8 @@ describe('BookingRequestPage', () => {
     const { fixture, loader, backend } = await open();
     fixture.debugElement.query(By.directive(AttachmentPicker)).triggerEventHandler('added', [new File([new Uint8Array(8)], 'frame.pdf')]);
     await chooseTunnel(loader, backend);
-    await (await input(loader, /^Start/)).setValue('2030-10-07T09:00');
-    await (await input(loader, /^End/)).setValue('2030-10-07T17:00');
-    await (await input(loader, /^Article name/)).setValue('Trailer, 1:5');
-    const kind = await (await field(loader, /^Coefficients based on/)).getControl(MatSelectHarness);
-    await kind?.open();
-    await kind?.clickOptions({ text: 'Frontal area' });
+    await setPeriod(loader, '2030-10-07T09:00', '2030-10-07T17:00');
+    await nameArticle(loader, 'Trailer, 1:5');
     await send(loader);
     backend.expectOne('/api/bookings').flush({ id: bookingId, tunnelName: 'Low-speed circuit' });
     backend.expectOne(`/api/bookings/${bookingId}/attachments`).flush({ title: 'Invalid request', detail: 'frame.pdf is not a valid .pdf file' }, { status: 400, statusText: 'Bad Request' });

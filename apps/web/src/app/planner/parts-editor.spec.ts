@@ -10,10 +10,11 @@ import { MatSelectHarness } from '@angular/material/select/testing';
 import type { ShapeInfo } from '@tunnelwright/contracts';
 import { PartsEditor } from './parts-editor';
 import { buildPartForm, type PartForm } from './plan-form';
+import { shapeFixture, sphereFixture } from './testing/shape-fixtures';
 
 const source = { citation: 'Invented handbook of drag, table 1', corroboration: null };
 const shapes: ShapeInfo[] = [
-  {
+  shapeFixture({
     id: 'circular-cylinder-cross-flow',
     label: 'Circular cylinder in cross-flow',
     kind: '2-d',
@@ -21,49 +22,24 @@ const shapes: ShapeInfo[] = [
     orientation: 'cross-flow',
     dragCoefficient: { curve: 'cylinder' },
     referenceArea: { basis: 'frontal', formula: 'length × diameter', dimensions: ['length', 'diameter'] },
-    frontalArea: null,
     characteristicLength: { dimension: 'diameter', description: 'cylinder diameter' },
-    reynoldsRange: null,
-    edges: 'rounded',
-    typicalFrontalArea: null,
     source,
-    fromMemory: false,
-    note: null,
-  },
-  {
-    id: 'sphere',
-    label: 'Sphere',
-    kind: '3-d',
-    family: 'sphere',
-    orientation: 'any',
-    dragCoefficient: { curve: 'sphere' },
-    referenceArea: { basis: 'frontal', formula: 'π × diameter² / 4', dimensions: ['diameter'] },
-    frontalArea: null,
-    characteristicLength: { dimension: 'diameter', description: 'sphere diameter' },
-    reynoldsRange: null,
-    edges: 'rounded',
-    typicalFrontalArea: null,
-    source,
-    fromMemory: false,
-    note: null,
-  },
-  {
-    id: 'person-standing',
-    label: 'Person standing',
-    kind: 'object',
-    family: 'person',
-    orientation: 'standing',
-    dragCoefficient: 1.2,
-    referenceArea: { basis: 'frontal', formula: 'frontal area as measured or estimated for the object', dimensions: ['frontalArea'] },
-    frontalArea: null,
-    characteristicLength: null,
-    reynoldsRange: null,
-    edges: 'rounded',
-    typicalFrontalArea: 0.55,
-    source,
-    fromMemory: true,
-    note: null,
-  },
+  }),
+  sphereFixture(source.citation),
+  shapeFixture(
+    {
+      id: 'person-standing',
+      label: 'Person standing',
+      kind: 'object',
+      family: 'person',
+      orientation: 'standing',
+      dragCoefficient: 1.2,
+      referenceArea: { basis: 'frontal', formula: 'frontal area as measured or estimated for the object', dimensions: ['frontalArea'] },
+      characteristicLength: null,
+      source,
+    },
+    { typicalFrontalArea: 0.55, fromMemory: true },
+  ),
 ];
 
 @Component({

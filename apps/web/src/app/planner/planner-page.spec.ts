@@ -7,28 +7,13 @@ import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
-import type { PlanEvaluation, ShapeInfo, Tunnel } from '@tunnelwright/contracts';
+import type { PlanEvaluation, Tunnel } from '@tunnelwright/contracts';
 import { AuthService } from '../core/auth-service';
 import { PlannerPage } from './planner-page';
+import { sphereFixture } from './testing/shape-fixtures';
 
 const caution = 'Planning estimate only, not a design value: design loads are for a licensed engineer to determine under the local code.';
-const sphere: ShapeInfo = {
-  id: 'sphere',
-  label: 'Sphere',
-  kind: '3-d',
-  family: 'sphere',
-  orientation: 'any',
-  dragCoefficient: { curve: 'sphere' },
-  referenceArea: { basis: 'frontal', formula: 'π × diameter² / 4', dimensions: ['diameter'] },
-  frontalArea: null,
-  characteristicLength: { dimension: 'diameter', description: 'sphere diameter' },
-  reynoldsRange: null,
-  edges: 'rounded',
-  typicalFrontalArea: null,
-  source: { citation: 'Invented handbook of drag, table 2', corroboration: null },
-  fromMemory: false,
-  note: null,
-};
+const sphere = sphereFixture('Invented handbook of drag, table 2');
 const tunnel = { id: '5a0c1d2e-3f40-4a5b-8c6d-7e8f90a1b2c3', name: 'Demo tunnel', area: 2.9, maxSpeed: 55 } as Tunnel;
 const evaluation: PlanEvaluation = {
   caution,
