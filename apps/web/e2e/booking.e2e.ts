@@ -1,21 +1,8 @@
-import { mkdirSync } from 'node:fs';
 import { DateTime } from 'luxon';
 import type { Page } from 'playwright-core';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import { demoUsers } from '../../../scripts/seed/demo-users';
-import { startApiServer, type ApiServer } from './support/api-server';
-import { launchBrowser, type TestBrowser } from './support/browser';
-import { signIn } from './support/sign-in';
-
-const shots = '/tmp/tw-shots';
-
-function userOf(role: 'lab_manager' | 'customer') {
-  const user = demoUsers.find((candidate) => candidate.role === role);
-  if (!user) {
-    throw new Error(`The demo seed has no ${role}`);
-  }
-  return user;
-}
+import { describe, expect, it } from 'vitest';
+import { shots, useBrowserSuite } from './support/browser-suite';
+import { demoUser } from './support/sign-in';
 
 async function openSection(page: Page, label: string, heading: string): Promise<void> {
   await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: label, exact: true }).click();
@@ -23,33 +10,16 @@ async function openSection(page: Page, label: string, heading: string): Promise<
 }
 
 describe('booking tunnel time', () => {
-  let api: ApiServer;
-  let browser: TestBrowser;
-
-  beforeAll(async () => {
-    mkdirSync(shots, { recursive: true });
-    api = await startApiServer();
-    browser = await launchBrowser();
-  });
-
-  afterEach(() => {
-    expect(browser.problems).toEqual([]);
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await api?.stop();
-  });
+  const suite = useBrowserSuite();
 
   it('a customer requests time, the lab manager quotes it, the customer accepts, both see it confirmed and the invitation is mailed', async () => {
-    const customer = userOf('customer');
-    const manager = userOf('lab_manager');
+    const customer = demoUser('customer');
+    const manager = demoUser('lab_manager');
     const article = `Roof-box model ${Date.now().toString(36)}`;
     // Far beyond the seeded demo bookings, so the slot is free.
     const day = DateTime.now().plus({ days: 90 }).toFormat('yyyy-LL-dd');
 
-    const customerPage = await browser.freshPage();
-    await signIn(customerPage, api.baseUrl, customer.email);
+    const customerPage = await suite.signedIn(customer.email);
     await openSection(customerPage, 'My bookings', 'My bookings');
     await customerPage.getByRole('link', { name: 'Request tunnel time' }).first().click();
     await customerPage.getByRole('heading', { name: 'Request tunnel time' }).waitFor();
@@ -77,8 +47,7 @@ describe('booking tunnel time', () => {
     const customerCard = customerPage.locator('tw-booking-summary').filter({ hasText: article });
     await customerCard.getByText('Requested', { exact: true }).waitFor();
 
-    const managerPage = await browser.freshPage();
-    await signIn(managerPage, api.baseUrl, manager.email);
+    const managerPage = await suite.signedIn(manager.email);
     await openSection(managerPage, 'Bookings', 'Bookings');
     const managerCard = managerPage.locator('tw-booking-summary').filter({ hasText: article });
     await managerCard.getByRole('button', { name: 'Write quote' }).click();
@@ -93,8 +62,7 @@ describe('booking tunnel time', () => {
     await managerCard.getByText('Quote to answer', { exact: true }).waitFor();
 
     // One tab at a time: each sign-in starts from a fresh page.
-    const answerPage = await browser.freshPage();
-    await signIn(answerPage, api.baseUrl, customer.email);
+    const answerPage = await suite.signedIn(customer.email);
     await openSection(answerPage, 'My bookings', 'My bookings');
     const answerCard = answerPage.locator('tw-booking-summary').filter({ hasText: article });
     await answerCard.getByText('Quote to answer', { exact: true }).waitFor();
@@ -105,12 +73,11 @@ describe('booking tunnel time', () => {
     await answerCard.getByText('Confirmed', { exact: true }).waitFor();
     await answerPage.screenshot({ path: `${shots}/booking-confirmed.png` });
 
-    const checkPage = await browser.freshPage();
-    await signIn(checkPage, api.baseUrl, manager.email);
+    const checkPage = await suite.signedIn(manager.email);
     await openSection(checkPage, 'Bookings', 'Bookings');
     await checkPage.locator('tw-booking-summary').filter({ hasText: article }).getByText('Confirmed', { exact: true }).waitFor();
 
-    await checkPage.goto(`${api.baseUrl}/dev-mailbox`);
+    await checkPage.goto(`${suite.api.baseUrl}/dev-mailbox`);
     const mail = checkPage.locator('mat-expansion-panel').filter({ hasText: 'Booking confirmed: Tunnel 1' }).filter({ hasText: customer.email }).first();
     await mail.waitFor();
     await mail.click();
@@ -118,15 +85,14 @@ describe('booking tunnel time', () => {
   });
 
   it('a customer attaches a saved plan, whose tunnel hours set the end, and a PNG drawing; the lab manager sees and downloads the drawing', async () => {
-    const customer = userOf('customer');
-    const manager = userOf('lab_manager');
+    const customer = demoUser('customer');
+    const manager = demoUser('lab_manager');
     const article = `Inspection trolley ${Date.now().toString(36)}`;
     const day = DateTime.now().plus({ days: 97 }).toFormat('yyyy-LL-dd');
     // A 1×1 PNG: the API checks that the content matches the extension.
     const drawing = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64');
 
-    const customerPage = await browser.freshPage();
-    await signIn(customerPage, api.baseUrl, customer.email);
+    const customerPage = await suite.signedIn(customer.email);
     await openSection(customerPage, 'My bookings', 'My bookings');
     await customerPage.getByRole('link', { name: 'Request tunnel time' }).first().click();
     await customerPage.getByRole('heading', { name: 'Request tunnel time' }).waitFor();
@@ -154,8 +120,7 @@ describe('booking tunnel time', () => {
     const customerCard = customerPage.locator('tw-booking-summary').filter({ hasText: article });
     await customerCard.getByRole('button', { name: 'Download side-view.png' }).waitFor();
 
-    const managerPage = await browser.freshPage();
-    await signIn(managerPage, api.baseUrl, manager.email);
+    const managerPage = await suite.signedIn(manager.email);
     await openSection(managerPage, 'Bookings', 'Bookings');
     const managerCard = managerPage.locator('tw-booking-summary').filter({ hasText: article });
     await managerCard.getByText(/side-view\.png \(\d+ B\)/).waitFor();
@@ -164,8 +129,7 @@ describe('booking tunnel time', () => {
     expect((await download).suggestedFilename()).toBe('side-view.png');
 
     // Later, the customer adds a photo to the same booking from its card, and it stays after a reload.
-    const laterPage = await browser.freshPage();
-    await signIn(laterPage, api.baseUrl, customer.email);
+    const laterPage = await suite.signedIn(customer.email);
     await openSection(laterPage, 'My bookings', 'My bookings');
     const laterCard = laterPage.locator('tw-booking-summary').filter({ hasText: article });
     await laterCard.getByRole('button', { name: 'Add drawings or photos' }).click();
@@ -181,8 +145,7 @@ describe('booking tunnel time', () => {
   });
 
   it('a lab manager presses Enter on a free stretch of next week and the maintenance form opens with that tunnel and period', async () => {
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, userOf('lab_manager').email);
+    const page = await suite.signedIn(demoUser('lab_manager').email);
     await openSection(page, 'Calendar', 'Calendar');
     await page.getByRole('table', { name: 'Calendar by tunnel' }).waitFor();
     await page.getByRole('button', { name: 'Later' }).click();
@@ -202,8 +165,7 @@ describe('booking tunnel time', () => {
   });
 
   it('a lab manager changes the hold length on the booking rules screen after confirming, then puts it back', async () => {
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, userOf('lab_manager').email);
+    const page = await suite.signedIn(demoUser('lab_manager').email);
     await openSection(page, 'Booking rules', 'Booking rules');
     const hold = page.getByLabel('Hold length (hours)');
     const original = await hold.inputValue();
@@ -228,8 +190,7 @@ describe('booking tunnel time', () => {
   it('a lab manager blocks a tunnel for maintenance on the calendar after the form explains what is missing, then removes it after confirming', async () => {
     const reason = `Fan bearing inspection ${Date.now().toString(36)}`;
     const day = DateTime.now().plus({ days: 5 }).toFormat('yyyy-LL-dd');
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, userOf('lab_manager').email);
+    const page = await suite.signedIn(demoUser('lab_manager').email);
     await openSection(page, 'Calendar', 'Calendar');
     await page.getByRole('table', { name: 'Calendar by tunnel' }).waitFor();
     await page.getByText('Month', { exact: true }).click();

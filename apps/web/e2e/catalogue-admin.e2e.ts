@@ -1,43 +1,13 @@
-import { mkdirSync } from 'node:fs';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import { demoUsers } from '../../../scripts/seed/demo-users';
-import { startApiServer, type ApiServer } from './support/api-server';
-import { launchBrowser, type TestBrowser } from './support/browser';
-import { signIn } from './support/sign-in';
-
-const shots = '/tmp/tw-shots';
-
-function emailOf(role: 'lab_manager' | 'customer'): string {
-  const user = demoUsers.find((candidate) => candidate.role === role);
-  if (!user) {
-    throw new Error(`The demo seed has no ${role}`);
-  }
-  return user.email;
-}
+import { describe, expect, it } from 'vitest';
+import { shots, useBrowserSuite } from './support/browser-suite';
+import { demoUser } from './support/sign-in';
 
 describe('catalogue administration', () => {
-  let api: ApiServer;
-  let browser: TestBrowser;
-
-  beforeAll(async () => {
-    mkdirSync(shots, { recursive: true });
-    api = await startApiServer();
-    browser = await launchBrowser();
-  });
-
-  afterEach(() => {
-    expect(browser.problems).toEqual([]);
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await api?.stop();
-  });
+  const suite = useBrowserSuite();
 
   it('a lab manager adds a tunnel after fixing what the form points out, then archives it after confirming', async () => {
     const name = `Boundary-layer tunnel ${Date.now().toString(36)}`;
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, emailOf('lab_manager'));
+    const page = await suite.signedIn(demoUser('lab_manager').email);
     await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Tunnels' }).click();
     await page.getByRole('heading', { name: 'Tunnels' }).waitFor();
     await page.getByRole('button', { name: 'New tunnel' }).first().click();
@@ -71,8 +41,7 @@ describe('catalogue administration', () => {
   });
 
   it('a customer sees the catalogue without the archived tunnel', async () => {
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, emailOf('customer'));
+    const page = await suite.signedIn(demoUser('customer').email);
     await page.getByText('Services and rates').waitFor();
     await page.locator('tw-catalogue-page mat-progress-bar').waitFor({ state: 'detached' });
     expect(await page.locator('tw-catalogue-page').innerText()).not.toContain('Boundary-layer tunnel');

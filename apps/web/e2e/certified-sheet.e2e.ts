@@ -1,95 +1,17 @@
-import { spawn, type ChildProcess } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { createWriteStream, mkdirSync, mkdtempSync, readdirSync, readFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { Balance, BalanceCalibration, createKnex, Organisation, TestArticle, TestRecord, Tunnel, User } from '@tunnelwright/db';
 import { simpleParser } from 'mailparser';
 import type { Page } from 'playwright-core';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import { demoCustomers, demoPassword, demoUsers } from '../../../scripts/seed/demo-users';
-import { repoRoot, startApiServer, type ApiServer } from './support/api-server';
-import { launchBrowser, type TestBrowser } from './support/browser';
-import { signIn } from './support/sign-in';
+import { describe, expect, it } from 'vitest';
+import { demoCustomers, demoPassword } from '../../../scripts/seed/demo-users';
+import { repoRoot } from './support/api-server';
+import { shots } from './support/browser-suite';
+import { demoUser } from './support/sign-in';
+import { useReducingSuite } from './support/worker-process';
 
-const shots = '/tmp/tw-shots';
-const databaseUrl = process.env.TW_E2E_DATABASE_URL ?? 'postgres://postgres@127.0.0.1:54329/tunnelwright_e2e';
-const redisUrl = process.env.TW_E2E_REDIS_URL ?? 'redis://127.0.0.1:63790/1';
 const exampleFile = join(repoRoot, 'libs/aero/examples/closed-car-yaw-sweep.csv');
 const testTitle = 'Hatchback roof-rail yaw sweep (invented)';
-const workerLog = '/tmp/tw-e2e-certified-worker.log';
-
-function userOf(role: 'technician' | 'analyst' | 'lab_manager' | 'customer') {
-  const user = role === 'customer' ? demoUsers.find((candidate) => candidate.organisation === demoCustomers.quillfen) : demoUsers.find((candidate) => candidate.role === role);
-  if (!user) throw new Error(`The demo data has no ${role}`);
-  return user;
-}
-
-/** Starts the background worker with the API's database, queue and raw store, so uploads are reduced. */
-function startWorkerProcess(): ChildProcess {
-  const log = createWriteStream(workerLog, { flags: 'w' });
-  const child = spawn('node', ['--import', 'tsx', 'apps/worker/src/main.ts'], {
-    cwd: repoRoot,
-    env: { ...process.env, DATABASE_URL: databaseUrl, REDIS_URL: redisUrl, LOG_LEVEL: 'info' },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  child.stdout?.pipe(log);
-  child.stderr?.pipe(log);
-  return child;
-}
-
-async function stopWorkerProcess(child: ChildProcess | undefined): Promise<void> {
-  if (!child || child.exitCode !== null) return;
-  const exited = new Promise((done) => child.once('exit', done));
-  child.kill('SIGTERM');
-  const timer = setTimeout(() => child.kill('SIGKILL'), 10_000);
-  await exited;
-  clearTimeout(timer);
-}
-
-/** Opens a running test of the demo customer in the closed-section tunnel, with a balance calibrated until far ahead. */
-async function openDemoTest(): Promise<void> {
-  const knex = createKnex(databaseUrl);
-  try {
-    const customer = await Organisation.query(knex).findOne({ name: demoCustomers.quillfen });
-    const manager = await User.query(knex).findOne({ email: userOf('lab_manager').email });
-    const tunnel = await Tunnel.query(knex).findOne({ kind: 'closed' });
-    if (!customer || !manager || !tunnel) throw new Error('The demo data lacks the customer, lab manager or closed tunnel');
-    const article = await TestArticle.query(knex).insert({
-      organisationId: customer.id,
-      name: 'Hatchback model with roof rails, 1:4 (invented)',
-      description: '',
-      kind: 'road_vehicle',
-      conditionOnReceipt: 'as new',
-      referenceArea: 0.14,
-      referenceAreaKind: 'frontal',
-      referenceLength: 0.7,
-      volume: 0.1,
-      frontalArea: null,
-      momentCentreX: 0,
-      momentCentreY: 0,
-      momentCentreZ: 0,
-      scale: 4,
-    });
-    const balance = await Balance.query(knex).insert({ identifier: 'SB-E2E-CERT-1', description: 'Invented six-component balance', capacities: [400, 400, 1200, 120, 200, 120] });
-    const identity = [0, 1, 2, 3, 4, 5].map((i) => [0, 1, 2, 3, 4, 5].map((j) => (i === j ? 1 : 0)));
-    await BalanceCalibration.query(knex).insert({ balanceId: balance.id, version: 1, matrices: { linear: identity }, calibratedOn: '2026-01-10', dueOn: '2099-01-10', enteredBy: manager.id });
-    await TestRecord.query(knex).insert({
-      organisationId: customer.id,
-      articleId: article.id,
-      tunnelId: tunnel.id,
-      balanceId: balance.id,
-      bookingId: null,
-      title: testTitle,
-      state: 'running',
-      configurations: [{ label: 'rails on', description: 'roof rails fitted' }],
-      reductionSettings: { minimumSamplesPerPoint: 2, corrections: { solidBlockage: 'frontal-area', wakeBlockage: 'none' } },
-      createdBy: manager.id,
-    });
-  } finally {
-    await knex.destroy();
-  }
-}
 
 /** The text of the newest mail to `to` whose subject matches, read from the SMTP fake's folder, waiting for it to arrive. */
 async function mailTo(mailDir: string, to: string, subject: RegExp): Promise<{ subject: string; text: string }> {
@@ -116,40 +38,15 @@ async function openTest(page: Page): Promise<void> {
 const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
 describe('certified result sheet', () => {
-  let api: ApiServer;
-  let browser: TestBrowser;
-  let worker: ChildProcess | undefined;
+  const suite = useReducingSuite(
+    { title: testTitle, articleName: 'Hatchback model with roof rails, 1:4 (invented)', balanceIdentifier: 'SB-E2E-CERT-1', configuration: { label: 'rails on', description: 'roof rails fitted' } },
+    '/tmp/tw-e2e-certified-worker.log',
+  );
   let reportNumber = '';
   let pdf: Buffer = Buffer.alloc(0);
 
-  beforeAll(async () => {
-    mkdirSync(shots, { recursive: true });
-    // The API and the worker, both child processes, share the raw store, spool folder and queue prefix.
-    Object.assign(process.env, {
-      RAW_STORE: 'fs',
-      RAW_STORE_DIR: mkdtempSync(join(tmpdir(), 'tw-e2e-raw-')),
-      UPLOAD_TMP_DIR: mkdtempSync(join(tmpdir(), 'tw-e2e-upload-')),
-      QUEUE_PREFIX: `tw-e2e-${Date.now().toString(36)}`,
-    });
-    api = await startApiServer();
-    await openDemoTest();
-    worker = startWorkerProcess();
-    browser = await launchBrowser();
-  }, 180_000);
-
-  afterEach(() => {
-    expect(browser.problems).toEqual([]);
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await stopWorkerProcess(worker);
-    await api?.stop();
-  });
-
   it('a technician uploads a run and submits its reduction; the analyst, who holds a signing right, approves it and issues the sheet', async () => {
-    const technician = await browser.freshPage();
-    await signIn(technician, api.baseUrl, userOf('technician').email);
+    const technician = await suite.signedIn(demoUser('technician').email);
     await openTest(technician);
     await technician.getByRole('link', { name: 'Upload run files' }).click();
     await technician.getByLabel('Configuration label').fill('rails on');
@@ -174,11 +71,10 @@ describe('certified result sheet', () => {
     await waiting.getByRole('note').getByText(/Only an analyst holding a signing right/).waitFor();
     await technician.screenshot({ path: `${shots}/certified-submitted.png`, fullPage: true });
 
-    const analyst = await browser.freshPage();
-    await signIn(analyst, api.baseUrl, userOf('analyst').email);
+    const analyst = await suite.signedIn(demoUser('analyst').email);
     await openTest(analyst);
     const card = analyst.getByRole('listitem', { name: 'Submission 1' });
-    await card.getByText(`by ${userOf('technician').name}`, { exact: false }).first().waitFor();
+    await card.getByText(`by ${demoUser('technician').name}`, { exact: false }).first().waitFor();
     await card.getByText(/Run 1 \(Data, rails on\), v1, uploaded by/).waitFor();
     await card.getByText('Yaw sweep with the roof rails fitted.').waitFor();
     await card.getByRole('button', { name: 'Approve' }).click();
@@ -207,12 +103,12 @@ describe('certified result sheet', () => {
 
   it('the customer follows the e-mailed link, signs in, downloads the PDF and the public page says it is exactly the issued file, and a one-byte change is not', async () => {
     expect(reportNumber).not.toBe('');
-    const customer = userOf('customer');
-    const mail = await mailTo(api.mail.mailDir, customer.email, new RegExp(`^Result sheet ${reportNumber} is ready`));
-    const link = new RegExp(`${api.baseUrl.replace(/[.:/]/g, '\\$&')}/documents/[0-9a-f-]{36}`).exec(mail.text)?.[0];
+    const customer = demoUser('customer', demoCustomers.quillfen);
+    const mail = await mailTo(suite.api.mail.mailDir, customer.email, new RegExp(`^Result sheet ${reportNumber} is ready`));
+    const link = new RegExp(`${suite.api.baseUrl.replace(/[.:/]/g, '\\$&')}/documents/[0-9a-f-]{36}`).exec(mail.text)?.[0];
     expect(link).toBeDefined();
 
-    const page = await browser.freshPage();
+    const page = await suite.browser.freshPage();
     await page.goto(link!);
     // Signed out, the link leads through sign-in and back to the sheet.
     await page.getByLabel('E-mail').fill(customer.email);
@@ -238,8 +134,8 @@ describe('certified result sheet', () => {
     await page.getByRole('row').filter({ hasText: reportNumber }).getByText('Valid').waitFor();
 
     // Anyone holding the file checks it without signing in.
-    const check = await browser.freshPage();
-    await check.goto(`${api.baseUrl}/verify/${reportNumber}`);
+    const check = await suite.browser.freshPage();
+    await check.goto(`${suite.api.baseUrl}/verify/${reportNumber}`);
     await check.getByRole('heading', { name: 'Check a result sheet' }).waitFor();
     const issued = check.getByRole('region', { name: 'Issued sheet' });
     await issued.getByText(reportNumber, { exact: true }).waitFor();
@@ -268,16 +164,14 @@ describe('certified result sheet', () => {
 
   it('a revision needs its reason and supersedes the sheet, which the public check then says; the lab manager reads it all in the audit trail and sees who holds a signing right', async () => {
     expect(reportNumber).not.toBe('');
-    const technician = await browser.freshPage();
-    await signIn(technician, api.baseUrl, userOf('technician').email);
+    const technician = await suite.signedIn(demoUser('technician').email);
     await openTest(technician);
     await technician.getByRole('button', { name: 'Submit for approval' }).click();
     await technician.getByRole('dialog').getByLabel('Note for the analyst').fill('Same run, checked again after the customer asked about the roof rails.');
     await technician.getByRole('dialog').getByRole('button', { name: 'Submit for approval' }).click();
     await technician.getByText('Submission 2 is waiting for approval.').waitFor();
 
-    const analyst = await browser.freshPage();
-    await signIn(analyst, api.baseUrl, userOf('analyst').email);
+    const analyst = await suite.signedIn(demoUser('analyst').email);
     await openTest(analyst);
     const second = analyst.getByRole('listitem', { name: 'Submission 2' });
     await second.getByRole('button', { name: 'Send back' }).click();
@@ -291,8 +185,7 @@ describe('certified result sheet', () => {
     await second.getByText('Approved, sheet not issued yet').waitFor();
 
     // A lab manager issues too; the test already has a valid sheet, so the revision must say why.
-    const manager = await browser.freshPage();
-    await signIn(manager, api.baseUrl, userOf('lab_manager').email);
+    const manager = await suite.signedIn(demoUser('lab_manager').email);
     await openTest(manager);
     await manager.getByRole('listitem', { name: 'Submission 2' }).getByRole('button', { name: 'Issue result sheet' }).click();
     const issue = manager.getByRole('dialog');
@@ -314,11 +207,11 @@ describe('certified result sheet', () => {
 
     await manager.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Signing rights' }).click();
     await manager.getByRole('heading', { name: 'Signing rights', level: 1 }).waitFor();
-    await manager.getByRole('table', { name: 'Current holders' }).getByText(userOf('analyst').name).waitFor();
+    await manager.getByRole('table', { name: 'Current holders' }).getByText(demoUser('analyst').name).waitFor();
 
     // The older sheet is still genuine, but the public check says it is no longer current.
-    const check = await browser.freshPage();
-    await check.goto(`${api.baseUrl}/verify/${reportNumber}`);
+    const check = await suite.browser.freshPage();
+    await check.goto(`${suite.api.baseUrl}/verify/${reportNumber}`);
     const issued = check.getByRole('region', { name: 'Issued sheet' });
     await issued.getByText('Superseded', { exact: true }).waitFor();
     await issued.getByRole('link', { name: revision }).waitFor();

@@ -1,42 +1,17 @@
-import { mkdirSync } from 'node:fs';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import { demoCustomers, demoUsers } from '../../../scripts/seed/demo-users';
-import { startApiServer, type ApiServer } from './support/api-server';
-import { launchBrowser, type TestBrowser } from './support/browser';
-import { navLabels, signIn } from './support/sign-in';
-
-const shots = '/tmp/tw-shots';
+import { describe, expect, it } from 'vitest';
+import { demoCustomers } from '../../../scripts/seed/demo-users';
+import { shots, useBrowserSuite } from './support/browser-suite';
+import { demoUser, navLabels } from './support/sign-in';
 
 describe('invitation path', () => {
-  let api: ApiServer;
-  let browser: TestBrowser;
-
-  beforeAll(async () => {
-    mkdirSync(shots, { recursive: true });
-    api = await startApiServer();
-    browser = await launchBrowser();
-  });
-
-  afterEach(() => {
-    expect(browser.problems).toEqual([]);
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await api?.stop();
-  });
+  const suite = useBrowserSuite();
 
   it('a lab manager invites a customer, who follows the mailed link, sets a password and is signed in', async () => {
-    const manager = demoUsers.find((user) => user.role === 'lab_manager');
-    if (!manager) {
-      throw new Error('The demo seed has no lab manager');
-    }
+    const manager = demoUser('lab_manager');
     const stamp = Date.now().toString(36);
     const email = `wren.halloway.${stamp}@quillfen.example`;
     const name = `Wren Halloway ${stamp}`;
-    const page = await browser.freshPage();
-
-    await signIn(page, api.baseUrl, manager.email);
+    const page = await suite.signedIn(manager.email);
     await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Users' }).click();
     await page.getByRole('heading', { name: 'Users' }).waitFor();
     await page.getByRole('button', { name: 'Invite someone' }).click();

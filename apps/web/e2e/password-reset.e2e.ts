@@ -1,37 +1,18 @@
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import { demoUsers } from '../../../scripts/seed/demo-users';
-import { startApiServer, type ApiServer } from './support/api-server';
-import { launchBrowser, type TestBrowser } from './support/browser';
-import { signIn } from './support/sign-in';
+import { describe, expect, it } from 'vitest';
+import { demoCustomers } from '../../../scripts/seed/demo-users';
+import { useBrowserSuite } from './support/browser-suite';
+import { demoUser, signIn } from './support/sign-in';
 
 describe('forgotten password and profile', () => {
-  let api: ApiServer;
-  let browser: TestBrowser;
-
-  beforeAll(async () => {
-    api = await startApiServer();
-    browser = await launchBrowser();
-  });
-
-  afterEach(() => {
-    expect(browser.problems).toEqual([]);
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await api?.stop();
-  });
+  const suite = useBrowserSuite();
 
   it('a customer resets a forgotten password through the mailed link, signs in with it and renames themself', async () => {
-    const customer = demoUsers.find((user) => user.email === 'customer@tarnwick.example');
-    const manager = demoUsers.find((user) => user.role === 'lab_manager');
-    if (!customer || !manager) {
-      throw new Error('The demo seed lacks the Tarnwick customer or a lab manager');
-    }
+    const customer = demoUser('customer', demoCustomers.tarnwick);
+    const manager = demoUser('lab_manager');
     const newPassword = 'Saffron-Kettle-Moorland-29';
 
-    let page = await browser.freshPage();
-    await page.goto(`${api.baseUrl}/sign-in`);
+    let page = await suite.browser.freshPage();
+    await page.goto(`${suite.api.baseUrl}/sign-in`);
     await page.getByRole('link', { name: 'Forgotten your password?' }).click();
     // The page is lazy-loaded: typing before it has replaced the sign-in form would fill the wrong field.
     await page.waitForURL(/\/forgot-password$/);
@@ -41,15 +22,14 @@ describe('forgotten password and profile', () => {
     await page.getByText('If an account uses that address').waitFor();
 
     // Demo mode: the lab manager's dev mailbox shows what was sent.
-    page = await browser.freshPage();
-    await signIn(page, api.baseUrl, manager.email);
-    await page.goto(`${api.baseUrl}/dev-mailbox`);
+    page = await suite.signedIn(manager.email);
+    await page.goto(`${suite.api.baseUrl}/dev-mailbox`);
     const message = page.locator('mat-expansion-panel').filter({ hasText: customer.email }).first();
     await message.waitFor();
     const link = await message.locator('.links a').first().getAttribute('href');
     expect(link).toMatch(/\/reset-password\?token=/);
 
-    page = await browser.freshPage();
+    page = await suite.browser.freshPage();
     await page.goto(link ?? '');
     await page.getByRole('heading', { name: 'Choose a new password' }).waitFor();
     await page.getByLabel('New password').fill(newPassword);
@@ -60,7 +40,7 @@ describe('forgotten password and profile', () => {
     await page.getByRole('button', { name: 'Change password' }).click();
     await page.getByText('Your password has been changed').waitFor();
 
-    await signIn(page, api.baseUrl, customer.email, newPassword);
+    await signIn(page, suite.api.baseUrl, customer.email, newPassword);
     await page.getByRole('button', { name: 'Account menu' }).click();
     await page.getByRole('menuitem', { name: 'Profile' }).click();
     await page.getByRole('heading', { name: 'Your profile' }).waitFor();

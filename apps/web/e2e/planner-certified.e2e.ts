@@ -1,40 +1,22 @@
 import type { Page } from 'playwright-core';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import { startApiServer, type ApiServer } from './support/api-server';
-import { launchBrowser, type TestBrowser } from './support/browser';
-import { signIn } from './support/sign-in';
+import { describe, expect, it } from 'vitest';
+import { useBrowserSuite } from './support/browser-suite';
 
 const plan = 'Estate car, full-size estimate';
 const caution = 'Planning estimate only, not a design value';
 
-async function openPlan(page: Page, baseUrl: string, email: string): Promise<void> {
-  await signIn(page, baseUrl, email);
+async function openPlan(page: Page): Promise<void> {
   await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Test planner' }).click();
   await page.getByRole('link', { name: new RegExp(plan) }).click();
   await page.getByRole('heading', { name: 'Certified result' }).waitFor();
 }
 
 describe('certified result on a plan', () => {
-  let api: ApiServer;
-  let browser: TestBrowser;
-
-  beforeAll(async () => {
-    api = await startApiServer();
-    browser = await launchBrowser();
-  });
-
-  afterEach(() => {
-    expect(browser.problems).toEqual([]);
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await api?.stop();
-  });
+  const suite = useBrowserSuite();
 
   it('the analyst unlinks the seeded sheet after confirming and links it again; the customer then sees the comparison with the caution', async () => {
-    const analyst = await browser.freshPage();
-    await openPlan(analyst, api.baseUrl, 'analyst@brackenmoor.example');
+    const analyst = await suite.signedIn('analyst@brackenmoor.example');
+    await openPlan(analyst);
     const panel = analyst.getByRole('region', { name: 'Certified result' });
     await panel.getByText(/BAL-\d{4}-\d{4}-R2, configuration A/).first().waitFor();
     await panel.getByText(caution, { exact: false }).waitFor();
@@ -54,8 +36,8 @@ describe('certified result on a plan', () => {
     await panel.getByRole('button', { name: 'Link' }).click();
     await panel.getByText(/by Daniel Okonjo-Vale/).waitFor();
 
-    const customer = await browser.freshPage();
-    await openPlan(customer, api.baseUrl, 'customer@quillfen.example');
+    const customer = await suite.signedIn('customer@quillfen.example');
+    await openPlan(customer);
     const seen = customer.getByRole('region', { name: 'Certified result' });
     await seen.getByText(/BAL-\d{4}-\d{4}-R2, configuration A/).first().waitFor();
     await seen.getByText(/(above|below) the measured value by/).waitFor();

@@ -1,12 +1,7 @@
-import { mkdirSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { demoUsers } from '../../../scripts/seed/demo-users';
-import { startApiServer, type ApiServer } from './support/api-server';
-import { launchBrowser, type TestBrowser } from './support/browser';
-import { signIn } from './support/sign-in';
-
-const shots = '/tmp/tw-shots';
+import { shots, useBrowserSuite } from './support/browser-suite';
 
 async function pickOption(page: Page, comboboxName: string, option: string): Promise<void> {
   await page.getByRole('combobox', { name: comboboxName }).click();
@@ -14,29 +9,12 @@ async function pickOption(page: Page, comboboxName: string, option: string): Pro
 }
 
 describe('test planner', () => {
-  let api: ApiServer;
-  let browser: TestBrowser;
-
-  beforeAll(async () => {
-    mkdirSync(shots, { recursive: true });
-    api = await startApiServer();
-    browser = await launchBrowser();
-  });
-
-  afterEach(() => {
-    expect(browser.problems).toEqual([]);
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await api?.stop();
-  });
+  const suite = useBrowserSuite();
 
   it('a customer builds a three-part plan, sees the checks for a tunnel with the caution, and saves it', async () => {
     const customer = demoUsers.find((person) => person.email === 'customer@quillfen.example');
     if (!customer) throw new Error('The demo seed has no Quillfen customer');
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, customer.email);
+    const page = await suite.signedIn(customer.email);
     await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Test planner' }).click();
     await page.getByRole('heading', { name: 'Test planner', level: 1 }).waitFor();
     // The seeded plan of the customer's own organisation is listed; the other customer's is not.

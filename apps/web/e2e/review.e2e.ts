@@ -1,31 +1,22 @@
-import { mkdirSync, mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { BalanceCalibration, createKnex, createRawStore, RawFile, Run, TestArticle, TestRecord, Tunnel, User } from '@tunnelwright/db';
 import type { Knex } from 'knex';
 import type { Page } from 'playwright-core';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { buildReductionConfig } from '../../api/src/ingest/build-reduction-config';
 import { queueReduction } from '../../api/src/ingest/queue-reduction';
 import { runReduction } from '../../worker/src/reductions/run-reduction';
-import { demoUsers } from '../../../scripts/seed/demo-users';
-import { repoRoot, startApiServer, type ApiServer } from './support/api-server';
-import { launchBrowser, type TestBrowser } from './support/browser';
-import { signIn } from './support/sign-in';
+import { databaseUrl, repoRoot } from './support/api-server';
+import { shots, useBrowserSuite } from './support/browser-suite';
+import { demoUser } from './support/sign-in';
 
-const shots = '/tmp/tw-shots';
 // Demo seed: the van test's run 1 awaits approval (so it can still change); the estate car's version 2 is approved.
 const openTest = 'Delivery van drag at yaw, open jet';
 const approvedTest = 'Estate car yaw sweep, baseline and mirrors off';
 const sphereTest = 'Turbulence sphere check (invented)';
-const databaseUrl = process.env.TW_E2E_DATABASE_URL ?? 'postgres://postgres@127.0.0.1:54329/tunnelwright_e2e';
 const header = 'time [s], point, yaw [deg], pitch [deg], q [Pa], p_baro [hPa], T_air [degC], RH [%], Fx [N], Fy [N], Fz [N], Mx [N m], My [N m], Mz [N m]';
-
-function emailOf(role: 'technician' | 'analyst' | 'lab_manager'): string {
-  const user = demoUsers.find((candidate) => candidate.role === role);
-  if (!user) throw new Error(`The demo seed has no ${role}`);
-  return user.email;
-}
 
 /** Adds a run to a test and reduces its file right here with the worker's own code, as the demo seed does. */
 async function addReducedRun(knex: Knex, testId: string, kind: Run['kind'], configurationLabel: string, fileName: string, bytes: Buffer): Promise<void> {
@@ -117,29 +108,15 @@ async function openReview(page: Page, title: string): Promise<void> {
 }
 
 describe('analyst review of a test', () => {
-  let api: ApiServer;
-  let browser: TestBrowser;
-
-  beforeAll(async () => {
-    mkdirSync(shots, { recursive: true });
-    Object.assign(process.env, { RAW_STORE: 'fs', RAW_STORE_DIR: mkdtempSync(join(tmpdir(), 'tw-e2e-raw-')) });
-    api = await startApiServer();
-    await addReviewRecords();
-    browser = await launchBrowser();
-  }, 180_000);
-
-  afterEach(() => {
-    expect(browser.problems).toEqual([]);
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await api?.stop();
+  const suite = useBrowserSuite({
+    // The records added here and the API read raw files from one store.
+    beforeApiStart: () => Object.assign(process.env, { RAW_STORE: 'fs', RAW_STORE_DIR: mkdtempSync(join(tmpdir(), 'tw-e2e-raw-')) }),
+    afterApiStart: addReviewRecords,
+    setupTimeoutMs: 180_000,
   });
 
   it('charts the run, excludes a point with a reason, restores it after a confirm, and shows the full-scale summary with the caution', async () => {
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, emailOf('analyst'));
+    const page = await suite.signedIn(demoUser('analyst').email);
     await openReview(page, openTest);
     await page.getByRole('img', { name: /Drag coefficient against yaw: Run 1/ }).waitFor();
     await page.getByRole('note').filter({ hasText: /not design loads/ }).first().waitFor();
@@ -169,8 +146,7 @@ describe('analyst review of a test', () => {
   }, 120_000);
 
   it('shows an approved version read-only', async () => {
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, emailOf('analyst'));
+    const page = await suite.signedIn(demoUser('analyst').email);
     await openReview(page, approvedTest);
     await page.getByText('This version is approved: its points and exclusions can no longer change.').waitFor();
     expect(await page.getByRole('table', { name: 'Points of run 1' }).getByRole('button').count()).toBe(0);
@@ -178,8 +154,7 @@ describe('analyst review of a test', () => {
   }, 120_000);
 
   it('overlays two configurations and gives the drag difference from the baseline in counts', async () => {
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, emailOf('analyst'));
+    const page = await suite.signedIn(demoUser('analyst').email);
     await openReview(page, approvedTest);
     // The seed leaves one point of run 1 version 2 out, with its reason, so the baseline has one yaw fewer.
     await page.getByRole('img', { name: /Drag coefficient against yaw: Run 1 baseline v2, 6 points; Run 2 mirrors off v1, 7 points/ }).waitFor();
@@ -206,8 +181,7 @@ describe('analyst review of a test', () => {
   }, 120_000);
 
   it('plots a sphere calibration against the published curves with its turbulence factor', async () => {
-    const page = await browser.freshPage();
-    await signIn(page, api.baseUrl, emailOf('technician'));
+    const page = await suite.signedIn(demoUser('technician').email);
     await openReview(page, sphereTest);
     await page.getByRole('img', { name: /sphere C_D against Reynolds number/ }).waitFor();
     await page.getByText('Turbulence factor TF = 385 000 / Re_crit').waitFor();

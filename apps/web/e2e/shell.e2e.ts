@@ -1,13 +1,9 @@
-import { mkdirSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Role } from '@tunnelwright/contracts';
-import { demoUsers } from '../../../scripts/seed/demo-users';
-import { startApiServer, type ApiServer } from './support/api-server';
-import { launchBrowser, type TestBrowser } from './support/browser';
-import { navLabels, signIn } from './support/sign-in';
+import { shots, useBrowserSuite } from './support/browser-suite';
+import { demoUser, navLabels } from './support/sign-in';
 
-const shots = '/tmp/tw-shots';
 const expectedNav: Record<Role, string[]> = {
   customer: ['Catalogue', 'Test planner', 'My bookings', 'Tests', 'Documents'],
   technician: ['Catalogue', 'My tunnel time', 'Tests', 'Documents'],
@@ -15,40 +11,15 @@ const expectedNav: Record<Role, string[]> = {
   lab_manager: ['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Booking rules', 'Audit log', 'Dev mailbox'],
 };
 
-function demoUser(role: Role) {
-  const user = demoUsers.find((candidate) => candidate.role === role);
-  if (!user) {
-    throw new Error(`The demo seed has no ${role}`);
-  }
-  return user;
-}
-
 describe('signed-in shell', () => {
-  let api: ApiServer;
-  let browser: TestBrowser;
+  const suite = useBrowserSuite();
   let page: Page;
-
-  beforeAll(async () => {
-    mkdirSync(shots, { recursive: true });
-    api = await startApiServer();
-    browser = await launchBrowser();
-  });
-
-  afterEach(() => {
-    expect(browser.problems).toEqual([]);
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await api?.stop();
-  });
 
   it.each<Role>(['customer', 'technician', 'analyst', 'lab_manager'])(
     'shows a %s only their own navigation',
     async (role) => {
-      page = await browser.freshPage();
       const user = demoUser(role);
-      await signIn(page, api.baseUrl, user.email);
+      page = await suite.signedIn(user.email);
       await expect.poll(() => navLabels(page)).toEqual(expectedNav[role]);
       await expect.poll(() => page.getByRole('button', { name: 'Account menu' }).innerText()).toContain(user.name);
       await page.getByRole('heading', { name: 'Catalogue' }).waitFor();
@@ -59,10 +30,9 @@ describe('signed-in shell', () => {
   );
 
   it('turns a customer away from staff pages', async () => {
-    page = await browser.freshPage();
-    await signIn(page, api.baseUrl, demoUser('customer').email);
+    page = await suite.signedIn(demoUser('customer').email);
     for (const staffPath of ['/admin/users', '/admin/tunnels', '/dev-mailbox']) {
-      await page.goto(`${api.baseUrl}${staffPath}`);
+      await page.goto(`${suite.api.baseUrl}${staffPath}`);
       await page.getByRole('heading', { name: 'This part of Tunnelwright is for laboratory staff' }).waitFor();
       expect(new URL(page.url()).pathname).toBe('/not-allowed');
     }
@@ -72,35 +42,33 @@ describe('signed-in shell', () => {
   });
 
   it('keeps the session across a reload through the refresh cookie', async () => {
-    page = await browser.freshPage();
-    await signIn(page, api.baseUrl, demoUser('analyst').email);
+    page = await suite.signedIn(demoUser('analyst').email);
     await page.reload();
     await page.getByRole('navigation', { name: 'Sections' }).waitFor();
     expect(new URL(page.url()).pathname).toBe('/catalogue');
   });
 
   it('signs out, and the old session no longer opens pages', async () => {
-    page = await browser.freshPage();
-    await signIn(page, api.baseUrl, demoUser('technician').email);
+    page = await suite.signedIn(demoUser('technician').email);
     await page.getByRole('button', { name: 'Account menu' }).click();
     await page.getByRole('menuitem', { name: 'Sign out' }).click();
     await page.getByRole('heading', { name: 'Sign in' }).waitFor();
     expect(new URL(page.url()).pathname).toBe('/sign-in');
 
-    await page.goto(`${api.baseUrl}/catalogue`);
+    await page.goto(`${suite.api.baseUrl}/catalogue`);
     await page.getByRole('heading', { name: 'Sign in' }).waitFor();
     expect(new URL(page.url()).searchParams.get('returnUrl')).toBe('/catalogue');
   });
 
   it('answers an unknown address with the not-found page', async () => {
-    page = await browser.freshPage();
-    await page.goto(`${api.baseUrl}/no-such-page`);
+    page = await suite.browser.freshPage();
+    await page.goto(`${suite.api.baseUrl}/no-such-page`);
     await page.getByRole('heading', { name: 'We could not find that page' }).waitFor();
   });
 
   it('shows why a sign-in failed', async () => {
-    page = await browser.freshPage();
-    await page.goto(`${api.baseUrl}/sign-in`);
+    page = await suite.browser.freshPage();
+    await page.goto(`${suite.api.baseUrl}/sign-in`);
     await page.getByLabel('E-mail').fill(demoUser('customer').email);
     await page.getByLabel('Password').fill('certainly-not-the-password');
     await page.getByRole('button', { name: 'Sign in' }).click();

@@ -12,8 +12,10 @@ export const repoRoot = resolve(import.meta.dirname, '../../../..');
 const port = Number(process.env.TW_E2E_PORT ?? 3100);
 /** Where the browser reaches the API and the built client. */
 export const baseUrl = `http://127.0.0.1:${port}`;
-const databaseUrl = process.env.TW_E2E_DATABASE_URL ?? 'postgres://postgres@127.0.0.1:54329/tunnelwright_e2e';
-const redisUrl = process.env.TW_E2E_REDIS_URL ?? 'redis://127.0.0.1:63790/1';
+/** The database the browser tests seed and the API, worker and set-up code share. */
+export const databaseUrl = process.env.TW_E2E_DATABASE_URL ?? 'postgres://postgres@127.0.0.1:54329/tunnelwright_e2e';
+/** The queue of the API and of any worker a browser test starts. */
+export const redisUrl = process.env.TW_E2E_REDIS_URL ?? 'redis://127.0.0.1:63790/1';
 const webDist = join(repoRoot, 'dist/web/browser');
 const logFile = '/tmp/tw-e2e-api.log';
 
