@@ -1,12 +1,13 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
-import { AbstractControl, FormControl, ReactiveFormsModule, ValidationErrors, Validators } from '@angular/forms';
+import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import type { Submission } from '@tunnelwright/contracts';
-import { problemFieldErrors, problemMessage } from '../core/problem-message';
+import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
+import { ReasonField, reasonControl, showReasonProblem } from '../shared/reason-field';
 import { ApprovalApi } from './approval-api';
 
 /** Which decision the dialog records. */
@@ -15,21 +16,11 @@ export interface DecisionDialogData {
   readonly decision: 'approve' | 'send-back';
 }
 
-/** Shortest reason the server accepts for sending back, counted after trimming. */
-export const minimumReasonLength = 10;
-
-/** Validator: a reason of at least `minimumReasonLength` characters once spaces at the ends are dropped. */
-export function reasonLength(control: AbstractControl): ValidationErrors | null {
-  const value = typeof control.value === 'string' ? control.value.trim() : '';
-  if (value === '') return { required: true };
-  return value.length < minimumReasonLength ? { tooShort: { length: value.length } } : null;
-}
-
 /** Approves a submission (with an optional comment) or sends it back (with a reason); closes with the decided submission. */
 @Component({
   selector: 'tw-decision-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule, ErrorBanner],
+  imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule, ErrorBanner, ReasonField],
   template: `
     <h2 mat-dialog-title>{{ approving ? 'Approve' : 'Send back' }} submission {{ data.submission.sequence }}?</h2>
     <mat-dialog-content>
@@ -41,18 +32,7 @@ export function reasonLength(control: AbstractControl): ValidationErrors | null 
         </mat-form-field>
       } @else {
         <p>The submitter is told the reason and can submit again after fixing it.</p>
-        <mat-form-field class="tw-full-width">
-          <mat-label>Reason</mat-label>
-          <textarea matInput [formControl]="reason" rows="3" maxlength="2000" required></textarea>
-          <mat-hint align="end">{{ reason.value.trim().length }} / at least 10</mat-hint>
-          @if (reason.hasError('server')) {
-            <mat-error>{{ reason.getError('server') }}</mat-error>
-          } @else if (reason.hasError('required')) {
-            <mat-error>Say why it is sent back</mat-error>
-          } @else if (reason.hasError('tooShort')) {
-            <mat-error>Write at least 10 characters</mat-error>
-          }
-        </mat-form-field>
+        <tw-reason-field [control]="reason" missing="Say why it is sent back" />
       }
       @if (sendError(); as message) {
         <tw-error-banner [message]="message" [retryable]="false" />
@@ -79,7 +59,7 @@ export class DecisionDialog {
   protected readonly approving = this.data.decision === 'approve';
 
   protected readonly comment = new FormControl('', { nonNullable: true, validators: Validators.maxLength(2000) });
-  protected readonly reason = new FormControl('', { nonNullable: true, validators: [reasonLength, Validators.maxLength(2000)] });
+  protected readonly reason = reasonControl();
   protected readonly sending = signal(false);
   protected readonly sendError = signal<string | null>(null);
 
@@ -97,11 +77,7 @@ export class DecisionDialog {
       next: (submission) => this.dialogRef.close(submission),
       error: (error: unknown) => {
         this.sending.set(false);
-        const field = problemFieldErrors(error).find((candidate) => candidate.field === 'reason');
-        if (field && !this.approving) {
-          this.reason.setErrors({ server: field.message });
-          this.reason.markAsTouched();
-        }
+        if (!this.approving) showReasonProblem(this.reason, error);
         this.sendError.set(problemMessage(error, this.approving ? 'The submission could not be approved.' : 'The submission could not be sent back.'));
       },
     });

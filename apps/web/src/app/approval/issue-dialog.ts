@@ -9,7 +9,7 @@ import type { ResultSheet, Submission } from '@tunnelwright/contracts';
 import { problemFieldErrors, problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { ApprovalApi } from './approval-api';
-import { reasonLength } from './decision-dialog';
+import { reasonLength } from '../shared/reason-field';
 
 /** What the issue dialog needs: the approved submission and, for a revision, the valid sheet it replaces. */
 export interface IssueDialogData {

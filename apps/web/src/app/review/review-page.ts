@@ -15,9 +15,9 @@ import { SafetyNotice } from '../core/safety-notice';
 import { ConfirmDialog, type ConfirmDialogData } from '../shared/confirm-dialog';
 import { EmptyState } from '../shared/empty-state';
 import { ErrorBanner } from '../shared/error-banner';
+import { openReasonDialog } from '../shared/reason-dialog';
 import { BaselineDeltaPanel } from './baseline-delta-panel';
 import { runLabel, runSeries, type ReviewAxis, type ReviewCoefficient } from './chart-series';
-import { ExclusionDialog, type ExclusionDialogData } from './exclusion-dialog';
 import { FullScalePanel } from './full-scale-panel';
 import { keptChoice } from './kept-choice';
 import { ReviewApi } from './review-api';
@@ -135,15 +135,20 @@ export class ReviewPage {
   }
 
   protected exclude(run: ReviewRun, point: ReviewPoint): void {
-    if (!run.selected) return;
-    const data: ExclusionDialogData = { reductionId: run.selected.reductionId, runNumber: run.runNumber, point };
+    const selected = run.selected;
+    if (!selected) return;
     this.actionError.set(null);
-    this.dialog
-      .open(ExclusionDialog, { data, width: '520px' })
-      .afterClosed()
-      .subscribe((exclusion) => {
-        if (exclusion) this.review.reload();
-      });
+    openReasonDialog(this.dialog, {
+      title: `Exclude point ${point.pointNumber} of run ${run.runNumber}?`,
+      message: 'The point stays listed, marked with your reason, and is left out of charts, comparisons and the result. You can restore it until the results are approved.',
+      missingReason: 'Say why the point is left out',
+      cancelLabel: 'Cancel',
+      confirmLabel: 'Exclude point',
+      send: (reason) => this.api.exclude(selected.reductionId, point.index, reason),
+      failure: 'The point could not be excluded.',
+    }).subscribe((exclusion) => {
+      if (exclusion) this.review.reload();
+    });
   }
 
   protected restore(run: ReviewRun, point: ReviewPoint): void {

@@ -12,8 +12,8 @@ import { ApprovalApi } from '../../approval/approval-api';
 import { problemMessage } from '../../core/problem-message';
 import { EmptyState } from '../../shared/empty-state';
 import { ErrorBanner } from '../../shared/error-banner';
+import { openReasonDialog } from '../../shared/reason-dialog';
 import { GrantSigningRightDialog } from './grant-signing-right-dialog';
-import { RevokeSigningRightDialog } from './revoke-signing-right-dialog';
 
 /** Lab managers' list of who may approve results and sign sheets, the rights removed before, and grant and removal. */
 @Component({
@@ -66,14 +66,20 @@ export class SigningRightsPage {
   }
 
   protected revoke(right: SigningRight): void {
-    this.dialog
-      .open(RevokeSigningRightDialog, { data: right, width: '520px', autoFocus: 'first-tabbable' })
-      .afterClosed()
-      .subscribe((removed: SigningRight | undefined) => {
-        if (removed) {
-          this.snackBar.open(`The signing right of ${removed.user.name} was removed.`, undefined, { duration: 5000 });
-          this.rights.reload();
-        }
-      });
+    openReasonDialog(this.dialog, {
+      title: `Remove the signing right of ${right.user.name}?`,
+      message: `${right.user.name} will no longer approve results or issue sheets. Sheets they signed stay valid, and the history keeps the right and the reason.`,
+      missingReason: 'Say why the right is removed',
+      cancelLabel: 'Keep the right',
+      confirmLabel: 'Remove signing right',
+      destructive: true,
+      send: (reason) => this.api.revokeSigningRight(right.id, reason),
+      failure: 'The signing right could not be removed.',
+    }).subscribe((removed) => {
+      if (removed) {
+        this.snackBar.open(`The signing right of ${removed.user.name} was removed.`, undefined, { duration: 5000 });
+        this.rights.reload();
+      }
+    });
   }
 }
