@@ -1,6 +1,6 @@
 import type { Knex } from 'knex';
-import { Organisation, Plan, recordAudit, ResultSheet, TestRecord, User } from '@tunnelwright/db';
-import { certifiedLinkColumns } from '../../apps/api/src/planner/certified-result';
+import { Organisation, Plan, ResultSheet, TestRecord, User } from '@tunnelwright/db';
+import { linkCertifiedResult } from '../../apps/api/src/planner/certified-result';
 import { certifiedTitle } from './approval';
 import { demoCustomers } from './demo-users';
 import { demoPlans } from './plans';
@@ -29,16 +29,7 @@ export async function seedPlanCertifiedLink(knex: Knex, created: string[]): Prom
     if (!plan) throw new Error(`the certified link needs the demo plan ${linkedPlan.name}`);
     if (plan.measuredSheetId === sheet.id) return;
     plan.organisation = organisation;
-    const columns = await certifiedLinkColumns(trx, plan, sheet.id, 'A', analyst.id);
-    await Plan.query(trx).findById(plan.id).patch(columns);
-    await recordAudit(trx, {
-      actorId: analyst.id,
-      action: 'plan.certified_result_linked',
-      entity: 'plan',
-      entityId: plan.id,
-      before: plan.measuredDragArea === null ? null : { sheetId: plan.measuredSheetId, source: plan.measuredSource, dragArea: plan.measuredDragArea },
-      after: { sheetId: columns.measuredSheetId, configurationCode: columns.measuredConfigurationCode, yaw: columns.measuredYaw, source: columns.measuredSource, dragArea: columns.measuredDragArea },
-    });
+    await linkCertifiedResult(trx, plan, sheet.id, 'A', analyst.id);
     created.push(`plan ${plan.name} linked to ${sheet.reportNumber}`);
   });
 }

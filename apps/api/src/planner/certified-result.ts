@@ -1,6 +1,6 @@
 import { AeroInputError, fullScaleDragArea } from '@tunnelwright/aero';
 import type { CertifiedCandidate, CertifiedCandidateConfiguration, CertifiedResultSource, MeasuredLink } from '@tunnelwright/contracts';
-import { ResultSheet, TestRecord, User, type Plan } from '@tunnelwright/db';
+import { Plan, recordAudit, ResultSheet, TestRecord, User } from '@tunnelwright/db';
 import type { Knex } from 'knex';
 import { HttpError } from '../errors/http-error';
 import type { ResultConfiguration, ResultPoint, ResultSheetData } from '../reports/result-sheet-data';
@@ -119,6 +119,24 @@ export async function certifiedLinkColumns(trx: Knex.Transaction, plan: Plan, sh
     measuredLinkedBy: linkedBy,
     measuredLinkedAt: new Date(),
   };
+}
+
+/**
+ * Links `plan` (loaded with its organisation, locked in `trx`) to a sheet's configuration and writes the audit row
+ * with the link before and after, so every way of linking records the same thing.
+ */
+export async function linkCertifiedResult(trx: Knex.Transaction, plan: Plan, sheetId: string, configurationCode: string, actorId: string): Promise<CertifiedLinkColumns> {
+  const columns = await certifiedLinkColumns(trx, plan, sheetId, configurationCode, actorId);
+  await Plan.query(trx).findById(plan.id).patch(columns);
+  await recordAudit(trx, {
+    actorId,
+    action: 'plan.certified_result_linked',
+    entity: 'plan',
+    entityId: plan.id,
+    before: plan.measuredDragArea === null ? null : { sheetId: plan.measuredSheetId, source: plan.measuredSource, dragArea: plan.measuredDragArea },
+    after: { sheetId: columns.measuredSheetId, configurationCode: columns.measuredConfigurationCode, yaw: columns.measuredYaw, source: columns.measuredSource, dragArea: columns.measuredDragArea },
+  });
+  return columns;
 }
 
 /** The plan columns an unlink clears. */

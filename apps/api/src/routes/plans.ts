@@ -3,7 +3,7 @@ import { certifiedResultLinkSchema, planInputSchema, planSaveSchema, type Measur
 import { isStaff, Organisation, Plan, PlanVersion, recordAudit, scopeToCaller, type User } from '@tunnelwright/db';
 import type { Knex } from 'knex';
 import { HttpError } from '../errors/http-error';
-import { certifiedCandidates, certifiedLinkColumns, measuredLinks, unlinkedColumns } from '../planner/certified-result';
+import { certifiedCandidates, certifiedLinkColumns, linkCertifiedResult, measuredLinks, unlinkedColumns } from '../planner/certified-result';
 import { evaluatePlan } from '../planner/evaluate-plan';
 import { toPlanSummary, toPlanVersion } from '../planner/plan-presenters';
 import { sampleIssuedSheet } from './approval-samples';
@@ -208,16 +208,7 @@ export const planRoutes: RouteDef[] = [
         const plan = await Plan.query(trx).findById(existing.id).forUpdate();
         if (!plan) throw HttpError.notFound('The plan');
         plan.organisation = existing.organisation;
-        const columns = await certifiedLinkColumns(trx, plan, body.sheetId, body.configurationCode, caller.id);
-        await Plan.query(trx).findById(plan.id).patch(columns);
-        await recordAudit(trx, {
-          actorId: caller.id,
-          action: 'plan.certified_result_linked',
-          entity: 'plan',
-          entityId: plan.id,
-          before: plan.measuredDragArea === null ? null : { sheetId: plan.measuredSheetId, source: plan.measuredSource, dragArea: plan.measuredDragArea },
-          after: { sheetId: columns.measuredSheetId, configurationCode: columns.measuredConfigurationCode, yaw: columns.measuredYaw, source: columns.measuredSource, dragArea: columns.measuredDragArea },
-        });
+        await linkCertifiedResult(trx, plan, body.sheetId, body.configurationCode, caller.id);
       });
       res.json(await planDetail(deps.knex, caller, await findPlan(caller, existing.id)));
     },
