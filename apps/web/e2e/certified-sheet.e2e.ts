@@ -149,8 +149,13 @@ describe('certified result sheet', () => {
     const tampered = Buffer.from(pdf);
     const at = Math.floor(tampered.length / 2);
     tampered[at] = tampered[at]! ^ 0x01;
+    // The wait starts before the focus: playwright turns on its file-dialog interception when the first listener
+    // is added, without waiting for chromium to confirm, so a key pressed in the same breath can open the dialog
+    // before it is intercepted and the event never comes.
+    const chosen = check.waitForEvent('filechooser');
     await check.getByRole('button', { name: /^Drop the PDF here/ }).focus();
-    const [chooser] = await Promise.all([check.waitForEvent('filechooser'), check.keyboard.press('Enter')]);
+    await check.keyboard.press('Enter');
+    const chooser = await chosen;
     await chooser.setFiles({ name: 'edited.pdf', mimeType: 'application/pdf', buffer: tampered });
     await check.getByText(`No match: edited.pdf is not the issued file of ${reportNumber}.`).waitFor();
     await check.getByText(sha256(tampered)).waitFor();
