@@ -3,7 +3,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createHash } from 'node:crypto';
-import { PointExclusion, Reduction, ReductionPoint, ResultSheet, SigningRight } from '@tunnelwright/db';
+import { PointExclusion, Reduction, ReductionPoint, ResultSheet, SigningRight, TestRecord } from '@tunnelwright/db';
 import { parse } from 'csv-parse/sync';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -191,6 +191,8 @@ describe('approval workflow and certified sheets', () => {
       expect(issued.body.caution).toMatch(/not design loads/);
       first = issued.body;
       expect((await post(manager, `/api/submissions/${approved.id}/issue`)).status).toBe(409);
+      // The certified sheet ends the tunnel work: the test is complete (common practice: a report closes the job).
+      expect((await TestRecord.query().findById(world.testId))?.state).toBe('complete');
 
       const mail = await waitForMail(t.config.mailDir, customer.email, { subject: new RegExp(first.reportNumber) });
       expect(mail.links).toContain(`http://localhost:3000/documents/${first.id}`);
@@ -278,7 +280,10 @@ describe('approval workflow and certified sheets', () => {
     it('every transition is in the test audit trail with actor and reason, for lab managers', async () => {
       const audit = await get(manager, `/api/audit?entity=test&entityId=${world.testId}&pageSize=100`);
       const actions = audit.body.items.map((e: { action: string }) => e.action);
-      for (const action of ['point.excluded', 'point.restored', 'submission.submitted', 'submission.approved', 'sheet.issued', 'sheet.superseded']) expect(actions).toContain(action);
+      for (const action of ['point.excluded', 'point.restored', 'submission.submitted', 'submission.approved', 'sheet.issued', 'sheet.superseded', 'test.completed']) expect(actions).toContain(action);
+      // Completed once, by the first sheet; the revision left the state alone.
+      expect(audit.body.items.filter((e: { action: string }) => e.action === 'test.completed')).toHaveLength(1);
+      expect(audit.body.items.find((e: { action: string }) => e.action === 'test.completed').after).toMatchObject({ state: 'complete', reportNumber: first.reportNumber });
       const superseded = audit.body.items.find((e: { action: string }) => e.action === 'sheet.superseded');
       expect(superseded.after.reason).toBe('Adds the repeat run of the baseline');
       expect(superseded.actorName).toBe(analyst.name);

@@ -94,7 +94,7 @@ describe('certified result sheet', () => {
     expect(reportNumber).toMatch(/^[A-Z]+-\d{4}-\d{4}-R1$/);
     await card.getByText(`Approved, issued as ${reportNumber}`).waitFor();
     // Where the test stands follows at once.
-    await analyst.getByText(`Under way · Certified: ${reportNumber}`).waitFor();
+    await analyst.getByText(`Complete · Certified: ${reportNumber}`).waitFor();
     const sheets = analyst.getByRole('table', { name: 'Result sheets of this test' });
     await sheets.getByRole('row').filter({ hasText: reportNumber }).getByText('Valid').waitFor();
     await analyst.getByRole('note').filter({ hasText: /licensed engineer|design/i }).first().waitFor();

@@ -165,7 +165,7 @@ export async function issueSheet(knex: Knex, submissionId: string, revisionReaso
   return knex.transaction(async (trx) => {
     const submission = await lockedSubmission(trx, submissionId);
     if (submission.state !== 'approved') throw illegal('Not approved', `This submission is ${stateWords[submission.state]}; only approved results can be issued.`);
-    await TestRecord.query(trx).findById(submission.testId).forUpdate();
+    const test = await TestRecord.query(trx).findById(submission.testId).forUpdate().throwIfNotFound();
     if (await ResultSheet.query(trx).select('id').findOne({ submissionId: submission.id })) {
       throw illegal('Already issued', 'A sheet has already been issued from this submission; correct it by submitting and approving new results, then issue a revision.');
     }
@@ -226,6 +226,11 @@ export async function issueSheet(knex: Knex, submissionId: string, revisionReaso
       entityId: submission.testId,
       after: { sheetId: sheet.id, reportNumber, revision, submissionId: submission.id, sha256: sheet.sha256, size: pdf.length, authorisedBy: approver.id, ...(previous ? { replaces: previous.reportNumber, reason: revisionReason.trim() } : {}) },
     });
+    // A certified sheet ends the tunnel work of a planned or running test; a revision leaves its state alone.
+    if (test.state === 'planned' || test.state === 'running') {
+      await TestRecord.query(trx).patch({ state: 'complete' }).where({ id: test.id });
+      await recordAudit(trx, { actorId: caller.id, action: 'test.completed', entity: 'test', entityId: test.id, before: { state: test.state }, after: { state: 'complete', reportNumber } });
+    }
     return { sheet, superseded };
   });
 }

@@ -15,6 +15,10 @@ describe('auditWording', () => {
     });
   });
 
+  it('says the test was completed by the sheet that ended it', () => {
+    expect(auditWording({ action: 'test.completed', after: { state: 'complete', reportNumber: 'BAL-2026-0004-R1' } })).toEqual({ action: 'Test complete', detail: 'BAL-2026-0004-R1' });
+  });
+
   it('keeps an unknown action as recorded and copes with an empty record', () => {
     expect(auditWording({ action: 'test.renamed', after: null })).toEqual({ action: 'test.renamed', detail: '' });
   });

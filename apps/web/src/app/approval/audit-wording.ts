@@ -9,6 +9,10 @@ export const testAuditActionLabels: Readonly<Record<string, string>> = {
   'sheet.superseded': 'Result sheet superseded',
   'point.excluded': 'Point left out',
   'point.restored': 'Point taken back in',
+  'test.created': 'Test opened',
+  'test.updated': 'Test edited',
+  'test.completed': 'Test complete',
+  'calibration.overridden': 'Overdue calibration allowed',
 };
 
 const reasonKeys = ['reason', 'revisionReason', 'decisionReason', 'comment', 'note'] as const;
