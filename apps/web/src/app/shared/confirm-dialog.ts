@@ -28,18 +28,12 @@ export interface ConfirmDialogData {
         mat-flat-button
         type="button"
         cdkFocusInitial
-        [class.destructive]="data.destructive"
+        [class.tw-destructive]="data.destructive"
         [mat-dialog-close]="true"
       >
         {{ data.confirmLabel }}
       </button>
     </mat-dialog-actions>
-  `,
-  styles: `
-    .destructive {
-      --mat-button-filled-container-color: var(--mat-sys-error);
-      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
-    }
   `,
 })
 export class ConfirmDialog {

@@ -40,16 +40,10 @@ export interface ReasonDialogData<T> {
     </mat-dialog-content>
     <mat-dialog-actions align="end">
       <button mat-button type="button" mat-dialog-close>{{ data.cancelLabel }}</button>
-      <button mat-flat-button type="button" [class.destructive]="data.destructive" [disabled]="sending()" (click)="confirm()">
+      <button mat-flat-button type="button" [class.tw-destructive]="data.destructive" [disabled]="sending()" (click)="confirm()">
         {{ data.confirmLabel }}
       </button>
     </mat-dialog-actions>
-  `,
-  styles: `
-    .destructive {
-      --mat-button-filled-container-color: var(--mat-sys-error);
-      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
-    }
   `,
 })
 export class ReasonDialog<T> {
