@@ -311,6 +311,36 @@ describe('review routes', () => {
       expect(body.reynoldsNumberRatio.note).toMatch(/lower Reynolds number.*may not capture full-scale behaviour/);
     });
 
+    it('entered air: dry air by the ideal-gas law, checked against the US Standard Atmosphere at 1000 m', async () => {
+      const dragArea = axial * scale * scale * 0.14;
+      const isa = (await fullScale(reductionId, { groundSpeed: 25, windSpeed: 4, windDirection: 0 })).body as FullScaleEstimate;
+      expect(isa.air).toEqual({ density: 1.225, temperature: 288.15, pressure: 101325, standard: true });
+      // US Standard Atmosphere 1976 at 1000 m geopotential (from memory): 898.76 hPa, 281.65 K (8.5 °C), ρ = 1.1117 kg/m³.
+      const response = await fullScale(reductionId, { groundSpeed: 25, windSpeed: 4, windDirection: 0, airTemperature: 8.5, airPressure: 898.76 });
+      expect(response.status, JSON.stringify(response.body)).toBe(200);
+      const high = response.body as FullScaleEstimate;
+      expect(high.air.standard).toBe(false);
+      expect(high.air.temperature).toBeCloseTo(281.65, 9);
+      expect(high.air.pressure).toBeCloseTo(89876, 6);
+      expect(relative(high.air.density, 1.1117)).toBeLessThan(5e-4);
+      // D = ½ρV_r²·C_D·A (definition) with the entered density; the relative wind does not depend on the air.
+      expect(relative(high.condition.drag as number, 0.5 * high.air.density * 29 * 29 * dragArea)).toBeLessThan(1e-12);
+      expect(relative((high.condition.power as number) / (isa.condition.power as number), high.air.density / 1.225)).toBeLessThan(1e-12);
+      // Re scales with ρ/μ; μ by Sutherland at 281.65 K is 1.7579e-5 Pa·s (US Standard Atmosphere 1976 table, from memory).
+      expect(relative(high.reynoldsNumberRatio.fullScaleReynoldsNumber, (high.air.density * 29 * 0.7 * scale) / 1.7579e-5)).toBeLessThan(5e-4);
+      // Only the temperature entered: the pressure stays at ISA sea level, ρ = 101325 / (287.05 × 308.15) (ideal gas, common practice).
+      const hot = (await fullScale(reductionId, { groundSpeed: 25, airTemperature: 35 })).body as FullScaleEstimate;
+      expect(relative(hot.air.density, 101325 / (287.05 * 308.15))).toBeLessThan(1e-12);
+      const cold = await fullScale(reductionId, { groundSpeed: 25, airTemperature: -60, airPressure: 1200 });
+      expect(cold.status).toBe(400);
+      expect(cold.body.errors).toEqual(
+        expect.arrayContaining([
+          { field: 'airTemperature', message: 'Air temperature must be between −40 °C and 55 °C' },
+          { field: 'airPressure', message: 'Air pressure must be between 700 hPa and 1100 hPa' },
+        ]),
+      );
+    });
+
     it('a crosswind past the measured yaw gives no figure, and says why', async () => {
       // 15 m/s across a 10 m/s vehicle meets it at atan(15/10) = 56° (vector addition), beyond the 10° sweep.
       const body = (await fullScale(reductionId, { groundSpeed: 10, windSpeed: 15, windDirection: 90 })).body as FullScaleEstimate;

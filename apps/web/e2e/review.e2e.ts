@@ -138,6 +138,12 @@ describe('analyst review of a test', () => {
     await page.getByRole('heading', { name: 'Tail wind at full scale' }).waitFor();
     await page.getByRole('img', { name: /Power against wind direction/ }).waitFor();
     await page.getByText(/Reynolds number than the full-scale vehicle/).waitFor();
+    // ISA sea level until the analyst enters the day's air; then dry air at what was entered.
+    await page.getByText(/ISA sea-level air \(1\.225 kg\/m³, 15 °C, 1,013\.25 hPa\)/).waitFor();
+    await page.getByLabel('Air temperature (°C)').fill('35');
+    await page.getByLabel('Air pressure (hPa)').fill('990');
+    await page.getByRole('button', { name: 'Estimate' }).click();
+    await page.getByText(/dry air at 35 °C and 990 hPa \(1\.119 kg\/m³\)/).waitFor();
 
     await points.getByRole('button', { name: 'Restore point 2', exact: true }).click();
     await page.getByRole('dialog').getByRole('button', { name: 'Restore' }).click();

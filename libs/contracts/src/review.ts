@@ -51,6 +51,20 @@ export const fullScaleInputSchema = z.object({
     .min(0, { message: 'Wind direction must be between 0° and 360°' })
     .max(360, { message: 'Wind direction must be between 0° and 360°' })
     .default(0),
+  /** Full-scale air temperature, °C; with the pressure left out too, the air is ISA sea level. */
+  airTemperature: z
+    .number({ message: 'Air temperature must be a number in °C' })
+    .finite({ message: 'Air temperature must be a finite number in °C' })
+    .min(-40, { message: 'Air temperature must be between −40 °C and 55 °C' })
+    .max(55, { message: 'Air temperature must be between −40 °C and 55 °C' })
+    .optional(),
+  /** Full-scale static air pressure, hPa; with the temperature left out too, the air is ISA sea level. */
+  airPressure: z
+    .number({ message: 'Air pressure must be a number in hPa' })
+    .finite({ message: 'Air pressure must be a finite number in hPa' })
+    .min(700, { message: 'Air pressure must be between 700 hPa and 1100 hPa' })
+    .max(1100, { message: 'Air pressure must be between 700 hPa and 1100 hPa' })
+    .optional(),
 });
 export type FullScaleInput = z.infer<typeof fullScaleInputSchema>;
 
@@ -168,9 +182,12 @@ const windAveragedSchema = z.object({
 
 export const fullScaleEstimateSchema = z.object({
   reductionId: z.uuid(),
-  input: z.object({ groundSpeed: z.number(), windSpeed: z.number(), windDirection: z.number() }),
-  /** Full-scale air used, ISA sea level. */
-  air: z.object({ density: z.number(), temperature: z.number() }),
+  input: z.object({ groundSpeed: z.number(), windSpeed: z.number(), windDirection: z.number(), airTemperature: z.number().optional(), airPressure: z.number().optional() }),
+  /**
+   * Full-scale air used: ISA sea level (`standard`) unless a temperature or pressure was entered, then dry air by the
+   * ideal-gas law at the entered values (ISA sea level for the one left out). Density kg/m³, temperature K, pressure Pa.
+   */
+  air: z.object({ density: z.number(), temperature: z.number(), pressure: z.number(), standard: z.boolean() }),
   /** Scale λ = full-scale length / model length, and the full-scale reference area λ²·S, m². */
   scale: z.number(),
   referenceArea: z.number(),

@@ -15,14 +15,14 @@ import { runLabel } from './chart-series';
 import { keptChoice } from './kept-choice';
 import { ReviewApi } from './review-api';
 import { ReviewChart, type ChartLine } from './review-chart';
-import { dragText, powerText, reynoldsText, windDirectionText } from './summary-format';
+import { airText, dragText, powerText, reynoldsText, windDirectionText } from './summary-format';
 
 /** Road speed and wind the estimate starts from: 25 m/s (90 km/h) into a 3 m/s head wind. */
 export const DEFAULT_ROAD_CONDITION: FullScaleInput = { groundSpeed: 25, windSpeed: 3, windDirection: 0 };
 
 /**
  * Summary of one run's shown version at full scale: wind-averaged C_D, drag and power at the ground speed and wind
- * the analyst enters (head, tail or any direction), power against wind direction, and the model-to-full-scale
+ * the analyst enters (head, tail or any direction) in ISA sea-level air or at an entered temperature and pressure, power against wind direction, and the model-to-full-scale
  * Reynolds-number ratio with what it means. Always shown with the design caution.
  */
 @Component({
@@ -53,6 +53,9 @@ export class FullScalePanel {
     groundSpeed: new FormControl<number | null>(DEFAULT_ROAD_CONDITION.groundSpeed, [Validators.required, Validators.min(0.1), Validators.max(150)]),
     windSpeed: new FormControl<number | null>(DEFAULT_ROAD_CONDITION.windSpeed, [Validators.required, Validators.min(0), Validators.max(60)]),
     windDirection: new FormControl<number | null>(DEFAULT_ROAD_CONDITION.windDirection, [Validators.required, Validators.min(0), Validators.max(360)]),
+    /** Blank with the pressure: ISA sea-level air. */
+    airTemperature: new FormControl<number | null>(null, [Validators.min(-40), Validators.max(55)]),
+    airPressure: new FormControl<number | null>(null, [Validators.min(700), Validators.max(1100)]),
   });
   private readonly submitted = signal<FullScaleInput>(DEFAULT_ROAD_CONDITION);
 
@@ -93,6 +96,7 @@ export class FullScalePanel {
   protected readonly drag = dragText;
   protected readonly reynolds = reynoldsText;
   protected readonly direction = windDirectionText;
+  protected readonly air = airText;
 
   /** Sets the wind direction from a preset button and estimates again. */
   protected preset(windDirection: number): void {
@@ -105,7 +109,13 @@ export class FullScalePanel {
       this.form.markAllAsTouched();
       return;
     }
-    const { groundSpeed, windSpeed, windDirection } = this.form.getRawValue();
-    this.submitted.set({ groundSpeed: Number(groundSpeed), windSpeed: Number(windSpeed), windDirection: Number(windDirection) });
+    const { groundSpeed, windSpeed, windDirection, airTemperature, airPressure } = this.form.getRawValue();
+    this.submitted.set({
+      groundSpeed: Number(groundSpeed),
+      windSpeed: Number(windSpeed),
+      windDirection: Number(windDirection),
+      ...(airTemperature === null ? {} : { airTemperature: Number(airTemperature) }),
+      ...(airPressure === null ? {} : { airPressure: Number(airPressure) }),
+    });
   }
 }

@@ -1,4 +1,4 @@
-import { coefficientText, dragText, powerText, reynoldsText, windDirectionText } from './summary-format';
+import { airText, coefficientText, dragText, powerText, reynoldsText, windDirectionText } from './summary-format';
 
 describe('summary formatting', () => {
   it('shows power and drag to three significant figures, in kilo units from 1000 up', () => {
@@ -22,6 +22,12 @@ describe('summary formatting', () => {
     expect(coefficientText({ value: 0.31234, expandedUncertainty: 0.00412 })).toBe('0.3123 ± 0.0041');
     expect(coefficientText({ value: -0.05, expandedUncertainty: null })).toBe('-0.0500');
     expect(coefficientText(null)).toBe('—');
+  });
+
+  it('names the full-scale air: ISA sea level, or the entered dry air', () => {
+    // ISA sea level: 1.225 kg/m³, 288.15 K, 101 325 Pa (US Standard Atmosphere 1976, from memory).
+    expect(airText({ density: 1.225, temperature: 288.15, pressure: 101325, standard: true })).toBe('ISA sea-level air (1.225 kg/m³, 15 °C, 1,013.25 hPa)');
+    expect(airText({ density: 1.11167, temperature: 281.65, pressure: 89876, standard: false })).toBe('dry air at 8.5 °C and 898.76 hPa (1.112 kg/m³)');
   });
 
   it('names the wind by its direction from the heading', () => {

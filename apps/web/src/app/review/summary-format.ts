@@ -52,3 +52,14 @@ export function windDirectionText(degrees: number): string {
   if (offNose === 90) return `Cross wind (${shown})`;
   return offNose < 90 ? `Quartering head wind (${shown})` : `Quartering tail wind (${shown})`;
 }
+
+/**
+ * The full-scale air an estimate used, in words: "ISA sea-level air (1.225 kg/m³, 15 °C, 1013.25 hPa)" or
+ * "dry air at 8.5 °C and 898.76 hPa (1.112 kg/m³)".
+ */
+export function airText(air: { density: number; temperature: number; pressure: number; standard: boolean }): string {
+  const celsius = Number((air.temperature - 273.15).toFixed(2)).toLocaleString('en-GB');
+  const hectopascals = Number((air.pressure / 100).toFixed(2)).toLocaleString('en-GB');
+  const density = air.density.toFixed(3);
+  return air.standard ? `ISA sea-level air (${density} kg/m³, ${celsius} °C, ${hectopascals} hPa)` : `dry air at ${celsius} °C and ${hectopascals} hPa (${density} kg/m³)`;
+}
