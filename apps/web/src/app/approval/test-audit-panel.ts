@@ -1,12 +1,9 @@
-import { DatePipe, JsonPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { MatButtonModule } from '@angular/material/button';
 import { MatPaginatorModule, PageEvent } from '@angular/material/paginator';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { MatTableModule } from '@angular/material/table';
-import type { AuditEntry } from '@tunnelwright/contracts';
 import { problemMessage } from '../core/problem-message';
+import { AuditEntriesTable, type AuditTextColumn } from '../shared/audit-entries-table';
 import { EmptyState } from '../shared/empty-state';
 import { ErrorBanner } from '../shared/error-banner';
 import { ApprovalApi } from './approval-api';
@@ -17,7 +14,7 @@ import { resourceCause } from './resource-error';
 @Component({
   selector: 'tw-test-audit-panel',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [DatePipe, JsonPipe, MatButtonModule, MatPaginatorModule, MatProgressBarModule, MatTableModule, EmptyState, ErrorBanner],
+  imports: [MatPaginatorModule, MatProgressBarModule, AuditEntriesTable, EmptyState, ErrorBanner],
   template: `
     <section aria-labelledby="test-audit-heading">
       <h2 id="test-audit-heading">Audit trail of this test</h2>
@@ -31,44 +28,7 @@ import { resourceCause } from './resource-error';
         @if (total() === 0) {
           <tw-empty-state icon="history" title="Nothing recorded yet" hint="Submissions, decisions, left-out points and issued sheets appear here." />
         } @else {
-          <table mat-table [dataSource]="rows()" multiTemplateDataRows aria-label="Audit trail of this test">
-            <ng-container matColumnDef="createdAt">
-              <th mat-header-cell *matHeaderCellDef>When</th>
-              <td mat-cell *matCellDef="let entry" class="when">{{ entry.createdAt | date: 'medium' }}</td>
-            </ng-container>
-            <ng-container matColumnDef="actor">
-              <th mat-header-cell *matHeaderCellDef>Who</th>
-              <td mat-cell *matCellDef="let entry">{{ entry.actorName ?? 'System' }}</td>
-            </ng-container>
-            <ng-container matColumnDef="action">
-              <th mat-header-cell *matHeaderCellDef>What</th>
-              <td mat-cell *matCellDef="let entry">{{ wording(entry).action }}</td>
-            </ng-container>
-            <ng-container matColumnDef="detail">
-              <th mat-header-cell *matHeaderCellDef>Reason or note</th>
-              <td mat-cell *matCellDef="let entry" class="detail">{{ wording(entry).detail || '—' }}</td>
-            </ng-container>
-            <ng-container matColumnDef="record">
-              <th mat-header-cell *matHeaderCellDef><span class="tw-visually-hidden">Record</span></th>
-              <td mat-cell *matCellDef="let entry">
-                @if (entry.before !== null || entry.after !== null) {
-                  <button mat-button type="button" [attr.aria-expanded]="expandedId() === entry.id" (click)="toggle(entry)">
-                    {{ expandedId() === entry.id ? 'Hide record' : 'Show record' }}
-                  </button>
-                }
-              </td>
-            </ng-container>
-            <ng-container matColumnDef="change">
-              <td mat-cell *matCellDef="let entry" [attr.colspan]="columns.length">
-                @if (expandedId() === entry.id) {
-                  <pre>{{ entry.after | json }}</pre>
-                }
-              </td>
-            </ng-container>
-            <tr mat-header-row *matHeaderRowDef="columns"></tr>
-            <tr mat-row *matRowDef="let row; columns: columns"></tr>
-            <tr mat-row *matRowDef="let row; columns: ['change']" class="detail-row"></tr>
-          </table>
+          <tw-audit-entries-table [entries]="rows()" label="Audit trail of this test" [textColumns]="textColumns" opens="record" />
           <mat-paginator
             [length]="total()"
             [pageIndex]="page() - 1"
@@ -85,27 +45,6 @@ import { resourceCause } from './resource-error';
     :host {
       display: block;
     }
-    table {
-      width: 100%;
-    }
-    .when {
-      white-space: nowrap;
-    }
-    .detail {
-      white-space: pre-line;
-    }
-    .detail-row {
-      height: 0;
-    }
-    pre {
-      margin: 4px 0 12px;
-      padding: 8px;
-      max-height: 240px;
-      overflow: auto;
-      background: var(--mat-sys-surface-container);
-      border-radius: var(--mat-sys-corner-small);
-      font-size: 12px;
-    }
   `,
 })
 export class TestAuditPanel {
@@ -113,7 +52,10 @@ export class TestAuditPanel {
 
   private readonly api = inject(ApprovalApi);
 
-  protected readonly columns = ['createdAt', 'actor', 'action', 'detail', 'record'];
+  protected readonly textColumns: readonly AuditTextColumn[] = [
+    { name: 'action', header: 'What', text: (entry) => auditWording(entry).action },
+    { name: 'detail', header: 'Reason or note', text: (entry) => auditWording(entry).detail || '—', keepsLines: true },
+  ];
   protected readonly page = signal(1);
   protected readonly pageSize = signal(10);
   protected readonly entries = rxResource({
@@ -122,8 +64,6 @@ export class TestAuditPanel {
   });
   protected readonly rows = computed(() => (this.entries.hasValue() ? this.entries.value().items : []));
   protected readonly total = computed(() => (this.entries.hasValue() ? this.entries.value().total : 0));
-  protected readonly expandedId = signal<string | null>(null);
-  protected readonly wording = auditWording;
 
   /** Reloads the trail, e.g. after a decision on the same page. */
   reload(): void {
@@ -137,9 +77,5 @@ export class TestAuditPanel {
   protected turnPage(event: PageEvent): void {
     this.page.set(event.pageIndex + 1);
     this.pageSize.set(event.pageSize);
-  }
-
-  protected toggle(entry: AuditEntry): void {
-    this.expandedId.update((current) => (current === entry.id ? null : entry.id));
   }
 }

@@ -1,14 +1,11 @@
-import { DatePipe, JsonPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatPaginatorModule, PageEvent } from '@angular/material/paginator';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
-import { MatTableModule } from '@angular/material/table';
-import type { AuditEntry } from '@tunnelwright/contracts';
 import { problemMessage } from '../../core/problem-message';
+import { AuditEntriesTable, type AuditTextColumn } from '../../shared/audit-entries-table';
 import { EmptyState } from '../../shared/empty-state';
 import { ErrorBanner } from '../../shared/error-banner';
 import { AuditApi, AuditQuery } from './audit-api';
@@ -17,53 +14,21 @@ import { AuditApi, AuditQuery } from './audit-api';
 @Component({
   selector: 'tw-audit-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [
-    DatePipe,
-    JsonPipe,
-    MatTableModule,
-    MatPaginatorModule,
-    MatProgressBarModule,
-    MatFormFieldModule,
-    MatSelectModule,
-    MatButtonModule,
-    EmptyState,
-    ErrorBanner,
-  ],
+  imports: [MatPaginatorModule, MatProgressBarModule, MatFormFieldModule, MatSelectModule, AuditEntriesTable, EmptyState, ErrorBanner],
   templateUrl: './audit-page.html',
   styles: `
-    table {
-      width: 100%;
-    }
     .filter {
       width: 220px;
-    }
-    .when {
-      white-space: nowrap;
-    }
-    .change {
-      display: grid;
-      grid-template-columns: 1fr 1fr;
-      gap: 12px;
-      padding: 8px 0 16px;
-      pre {
-        margin: 4px 0 0;
-        padding: 8px;
-        max-height: 240px;
-        overflow: auto;
-        background: var(--mat-sys-surface-container);
-        border-radius: var(--mat-sys-corner-small);
-        font-size: 12px;
-      }
-    }
-    .detail-row {
-      height: 0;
     }
   `,
 })
 export class AuditPage {
   private readonly api = inject(AuditApi);
 
-  protected readonly columns = ['createdAt', 'actor', 'action', 'entity', 'details'];
+  protected readonly textColumns: readonly AuditTextColumn[] = [
+    { name: 'action', header: 'Action', text: (entry) => entry.action },
+    { name: 'entity', header: 'Record', text: (entry) => entry.entity },
+  ];
   /** The kinds of record the trail can be filtered by, with their names in the menu ('' for everything). */
   protected readonly entities: readonly { value: string; label: string }[] = [
     { value: '', label: 'Everything' },
@@ -89,7 +54,6 @@ export class AuditPage {
     const error = this.entries.error();
     return error ? problemMessage(error.cause ?? error, 'The audit log could not be loaded.') : null;
   });
-  protected readonly expandedId = signal<string | null>(null);
 
   protected filterBy(entity: string): void {
     this.query.update((current) => ({ ...current, entity, page: 1 }));
@@ -97,9 +61,5 @@ export class AuditPage {
 
   protected turnPage(event: PageEvent): void {
     this.query.update((current) => ({ ...current, page: event.pageIndex + 1, pageSize: event.pageSize }));
-  }
-
-  protected toggle(entry: AuditEntry): void {
-    this.expandedId.update((current) => (current === entry.id ? null : entry.id));
   }
 }
