@@ -1,9 +1,9 @@
-import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { booleanAttribute, ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatCardModule } from '@angular/material/card';
 import { SafetyNotice } from '../core/safety-notice';
 import { Wordmark } from '../shared/wordmark';
 
-/** The frame of the signed-out pages: wordmark, one card with the page's content, the safety notice. */
+/** The frame of the pages open without signing in: wordmark, one card with the page's content, the safety notice. */
 @Component({
   selector: 'tw-auth-frame',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -11,7 +11,7 @@ import { Wordmark } from '../shared/wordmark';
   template: `
     <main class="frame">
       <div class="brand"><tw-wordmark [height]="40" /></div>
-      <mat-card appearance="outlined" class="card">
+      <mat-card appearance="outlined" class="card" [class.wide]="wide()">
         <mat-card-header>
           <mat-card-title><h1>{{ heading() }}</h1></mat-card-title>
         </mat-card-header>
@@ -41,6 +41,9 @@ import { Wordmark } from '../shared/wordmark';
       max-width: 440px;
       background: var(--mat-sys-surface);
     }
+    .card.wide {
+      max-width: 680px;
+    }
     h1 {
       font: var(--mat-sys-headline-small);
       margin: 0 0 12px;
@@ -55,4 +58,6 @@ import { Wordmark } from '../shared/wordmark';
 })
 export class AuthFrame {
   readonly heading = input.required<string>();
+  /** Whether the card is wide enough for a table of facts, as on the public check of a sheet, not just a short form. */
+  readonly wide = input(false, { transform: booleanAttribute });
 }

@@ -2,7 +2,6 @@ import { ChangeDetectionStrategy, Component, computed, effect, inject, input, si
 import { rxResource } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
@@ -12,12 +11,11 @@ import { of } from 'rxjs';
 import { ApprovalApi } from '../approval/approval-api';
 import { issueDateText } from '../approval/approval-labels';
 import { resourceCause } from '../approval/resource-error';
+import { AuthFrame } from '../auth/auth-frame';
 import { problemMessage, problemStatus } from '../core/problem-message';
-import { SafetyNotice } from '../core/safety-notice';
 import { ErrorBanner } from '../shared/error-banner';
 import { FileDropZone } from '../shared/file-drop-zone';
 import { fileSizeText } from '../shared/file-size-text';
-import { Wordmark } from '../shared/wordmark';
 import { tidyReportNumber, verdictOf, type Verdict } from './verdict';
 
 /** Largest file the server compares; issued sheets are far smaller. */
@@ -42,15 +40,13 @@ interface FileOutcome {
     ReactiveFormsModule,
     RouterLink,
     MatButtonModule,
-    MatCardModule,
     MatFormFieldModule,
     MatIconModule,
     MatInputModule,
     MatProgressBarModule,
+    AuthFrame,
     ErrorBanner,
     FileDropZone,
-    SafetyNotice,
-    Wordmark,
   ],
   templateUrl: './verify-page.html',
   styleUrl: './verify-page.scss',
