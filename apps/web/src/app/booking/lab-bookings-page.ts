@@ -16,11 +16,11 @@ import { problemMessage } from '../core/problem-message';
 import { ConfirmDialog, ConfirmDialogData } from '../shared/confirm-dialog';
 import { EmptyState } from '../shared/empty-state';
 import { ErrorBanner } from '../shared/error-banner';
+import { openReasonDialog } from '../shared/reason-dialog';
 import { BookingApi } from './booking-api';
 import { BookingSummary } from './booking-summary';
 import { CancelBookingDialog } from './cancel-booking-dialog';
 import { CounterProposalDialog } from './counter-proposal-dialog';
-import { DeclineBookingDialog } from './decline-booking-dialog';
 import { QuoteEditor } from './quote-editor';
 
 const sections: readonly { title: string; states: readonly BookingState[] }[] = [
@@ -87,7 +87,19 @@ export class LabBookingsPage {
   }
 
   protected decline(booking: Booking): void {
-    this.openThenReload(this.dialog.open(DeclineBookingDialog, { data: booking, width: '520px' }).afterClosed(), 'Request declined.');
+    // The customer is told the reason and the slot is freed; the API takes any reason that is not blank.
+    const declined = openReasonDialog(this.dialog, {
+      title: `Decline the request from ${booking.organisationName}?`,
+      message: `The customer is told the reason and the slot on ${booking.tunnelName} is freed.`,
+      missingReason: 'Say why the request is declined',
+      minimumLength: 1,
+      cancelLabel: 'Keep the request',
+      confirmLabel: 'Decline request',
+      destructive: true,
+      send: (reason) => this.api.decline(booking.id, reason),
+      failure: 'The request could not be declined.',
+    });
+    this.openThenReload(declined, 'Request declined.');
   }
 
   protected counterPropose(booking: Booking): void {

@@ -4,7 +4,7 @@ import { MAT_DIALOG_DATA, MatDialog, MatDialogConfig, MatDialogModule, MatDialog
 import type { Observable } from 'rxjs';
 import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from './error-banner';
-import { ReasonField, reasonControl, showReasonProblem } from './reason-field';
+import { ReasonField, minimumReasonLength, reasonControl, showReasonProblem } from './reason-field';
 
 /** What the reason dialog asks, and how it sends the answer. */
 export interface ReasonDialogData<T> {
@@ -12,6 +12,8 @@ export interface ReasonDialogData<T> {
   readonly message: string;
   /** The error under an empty reason, e.g. "Say why the right is removed". */
   readonly missingReason: string;
+  /** The shortest reason accepted, counted after trimming; 1 takes any words at all. Defaults to `minimumReasonLength`. */
+  readonly minimumLength?: number;
   /** Label of the button that closes without acting, e.g. "Keep the right". */
   readonly cancelLabel: string;
   /** Label of the button that acts, e.g. "Remove signing right". */
@@ -33,7 +35,7 @@ export interface ReasonDialogData<T> {
     <h2 mat-dialog-title>{{ data.title }}</h2>
     <mat-dialog-content>
       <p>{{ data.message }}</p>
-      <tw-reason-field [control]="reason" [missing]="data.missingReason" />
+      <tw-reason-field [control]="reason" [missing]="data.missingReason" [minimum]="minimumLength" />
       @if (sendError(); as message) {
         <tw-error-banner [message]="message" [retryable]="false" />
       }
@@ -50,7 +52,8 @@ export class ReasonDialog<T> {
   private readonly dialogRef = inject<MatDialogRef<ReasonDialog<T>, T>>(MatDialogRef);
   protected readonly data = inject<ReasonDialogData<T>>(MAT_DIALOG_DATA);
 
-  protected readonly reason = reasonControl();
+  protected readonly minimumLength = this.data.minimumLength ?? minimumReasonLength;
+  protected readonly reason = reasonControl(this.minimumLength);
   protected readonly sending = signal(false);
   protected readonly sendError = signal<string | null>(null);
 

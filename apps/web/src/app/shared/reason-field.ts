@@ -1,22 +1,30 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
-import { AbstractControl, FormControl, ReactiveFormsModule, ValidationErrors, Validators } from '@angular/forms';
+import { AbstractControl, FormControl, ReactiveFormsModule, ValidationErrors, ValidatorFn, Validators } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { problemFieldErrors } from '../core/problem-message';
 
-/** Shortest reason the server accepts, counted after trimming. */
+/** Shortest reason the server accepts for most acts, counted after trimming; a declined request takes any words. */
 export const minimumReasonLength = 10;
 
-/** Validator: a reason of at least `minimumReasonLength` characters once spaces at the ends are dropped. */
-export function reasonLength(control: AbstractControl): ValidationErrors | null {
-  const value = typeof control.value === 'string' ? control.value.trim() : '';
-  if (value === '') return { required: true };
-  return value.length < minimumReasonLength ? { tooShort: { length: value.length } } : null;
+/** Validator factory: a reason of at least `minimum` characters once spaces at the ends are dropped. */
+export function reasonOfAtLeast(minimum: number): ValidatorFn {
+  return (control: AbstractControl): ValidationErrors | null => {
+    const value = typeof control.value === 'string' ? control.value.trim() : '';
+    if (value === '') return { required: true };
+    return value.length < minimum ? { tooShort: { length: value.length } } : null;
+  };
 }
 
-/** An empty reason control with the checks the server makes. */
-export function reasonControl(): FormControl<string> {
-  return new FormControl('', { nonNullable: true, validators: [reasonLength, Validators.maxLength(2000)] });
+/** Validator: a reason of at least `minimumReasonLength` characters once spaces at the ends are dropped. */
+export const reasonLength: ValidatorFn = reasonOfAtLeast(minimumReasonLength);
+
+/**
+ * An empty reason control with the checks the server makes: at least `minimum` characters after trimming (1 for an
+ * act whose reason may be a word or two) and at most 2000.
+ */
+export function reasonControl(minimum = minimumReasonLength): FormControl<string> {
+  return new FormControl('', { nonNullable: true, validators: [reasonOfAtLeast(minimum), Validators.maxLength(2000)] });
 }
 
 /** Puts the API's complaint about the `reason` field of a refused request, if it made one, under the field. */
@@ -40,13 +48,15 @@ export function showReasonProblem(control: FormControl<string>, error: unknown):
     <mat-form-field class="tw-full-width">
       <mat-label>Reason</mat-label>
       <textarea matInput [formControl]="control()" rows="3" maxlength="2000" required cdkFocusInitial></textarea>
-      <mat-hint align="end">{{ control().value.trim().length }} / at least {{ minimum }}</mat-hint>
+      @if (minimum() > 1) {
+        <mat-hint align="end">{{ control().value.trim().length }} / at least {{ minimum() }}</mat-hint>
+      }
       @if (control().hasError('server')) {
         <mat-error>{{ control().getError('server') }}</mat-error>
       } @else if (control().hasError('required')) {
         <mat-error>{{ missing() }}</mat-error>
       } @else if (control().hasError('tooShort')) {
-        <mat-error>Write at least {{ minimum }} characters</mat-error>
+        <mat-error>Write at least {{ minimum() }} characters</mat-error>
       }
     </mat-form-field>
   `,
@@ -61,6 +71,6 @@ export class ReasonField {
   readonly control = input.required<FormControl<string>>();
   /** The error under an empty reason, e.g. "Say why the right is removed". */
   readonly missing = input.required<string>();
-
-  protected readonly minimum = minimumReasonLength;
+  /** The shortest reason the control accepts, as given to `reasonControl`; the count towards it shows only above 1. */
+  readonly minimum = input(minimumReasonLength);
 }
