@@ -7,7 +7,7 @@ import { PointExclusion, Reduction, ReductionPoint, ResultSheet, SigningRight, T
 import { parse } from 'csv-parse/sync';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { sampleReducedRun, type ReducedSample } from '../src/routes/approval-samples';
+import { sampleReducedRun, sampleSubmission, type ReducedSample } from '../src/routes/approval-samples';
 import { FixtureBuilder, type FixtureUser } from './support/fixtures';
 import { waitForMail } from './support/mailbox';
 import { createTestApp, type TestApp } from './support/test-app';
@@ -301,6 +301,42 @@ describe('approval workflow and certified sheets', () => {
       expect((await post(manager, `/api/submissions/${submitted.body.id}/issue`)).status).toBe(409);
       expect((await Reduction.query().findById(other.reductionId))?.approvedAt).toBeNull();
       expect((await submit(technician, [other.reductionId], other.testId)).status).toBe(201);
+    });
+  });
+
+  describe('illegal transitions', () => {
+    it('older approved results cannot be issued once newer ones are approved (409); the newest can', async () => {
+      const older = await sampleSubmission(f, 'approved');
+      const newer = await sampleSubmission(f, 'approved', older.testId);
+      const refused = await post(manager, `/api/submissions/${older.submissionId}/issue`);
+      expect(refused.status).toBe(409);
+      expect(refused.body.detail).toMatch(/Submission 2 of this test was approved after this one \(1\)/);
+      expect(await ResultSheet.query().where('testId', older.testId).resultSize()).toBe(0);
+      expect((await post(manager, `/api/submissions/${newer.submissionId}/issue`)).status).toBe(201);
+      expect((await post(manager, `/api/submissions/${older.submissionId}/issue`)).status).toBe(409);
+    });
+
+    it('a sent-back submission can be neither approved nor sent back again (409)', async () => {
+      const { submissionId } = await sampleSubmission(f);
+      expect((await post(analyst, `/api/submissions/${submissionId}/send-back`, { reason: 'Run 1 yaw offset not applied' })).status).toBe(200);
+      const approve = await post(analyst, `/api/submissions/${submissionId}/approve`);
+      expect(approve.status).toBe(409);
+      expect(approve.body.detail).toMatch(/sent back/);
+      expect((await post(secondAnalyst, `/api/submissions/${submissionId}/send-back`, { reason: 'Second thoughts on run 1' })).status).toBe(409);
+    });
+
+    it('a cancelled test cannot be submitted (409), and a point of an unfinished reduction cannot be left out (409)', async () => {
+      const cancelled = await sampleReducedRun(f);
+      await TestRecord.query().findById(cancelled.testId).patch({ state: 'cancelled' });
+      const submitted = await submit(technician, [cancelled.reductionId], cancelled.testId);
+      expect(submitted.status).toBe(409);
+      expect(submitted.body.detail).toMatch(/cancelled test/);
+
+      const unfinished = await sampleReducedRun(f);
+      await Reduction.query().findById(unfinished.reductionId).patch({ state: 'running' });
+      const excluded = await request(t.app).put(`/api/reductions/${unfinished.reductionId}/points/1/exclusion`).set(as(analyst)).send({ reason: 'Model vibrated visibly at this yaw' });
+      expect(excluded.status).toBe(409);
+      expect(excluded.body.detail).toMatch(/is running; points can be excluded once it has finished/);
     });
   });
 

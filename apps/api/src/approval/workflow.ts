@@ -169,6 +169,11 @@ export async function issueSheet(knex: Knex, submissionId: string, revisionReaso
     if (await ResultSheet.query(trx).select('id').findOne({ submissionId: submission.id })) {
       throw illegal('Already issued', 'A sheet has already been issued from this submission; correct it by submitting and approving new results, then issue a revision.');
     }
+    // Results approved later replace these: issuing the older ones now would supersede the newer results with them.
+    const later = await Submission.query(trx).select('sequence').where('testId', submission.testId).where('state', 'approved').where('sequence', '>', submission.sequence).orderBy('sequence').first();
+    if (later) {
+      throw illegal('Newer results approved', `Submission ${later.sequence} of this test was approved after this one (${submission.sequence}); issue from the newest approved results.`);
+    }
     if (caller.role !== 'lab_manager') await requireSigningRight(trx, caller, 'issue result sheets');
     const previous = await ResultSheet.query(trx).select('id', 'series', 'revision', 'reportNumber').where({ testId: submission.testId, state: 'valid' }).forUpdate().first();
     if (previous && revisionReason.trim().length < 10) {

@@ -137,7 +137,7 @@ export class ApprovalPanel {
 
   protected issueBlock(submission: Submission): string | null {
     const caller = this.caller();
-    return caller && this.signingRight.hasValue() ? issueBlock(submission, caller) : null;
+    return caller && this.signingRight.hasValue() ? issueBlock(submission, caller, this.submissions.hasValue() ? this.submissions.value() : []) : null;
   }
 
   /** Whether the caller's rights are known, so the decision buttons or the reason they are missing can be shown. */

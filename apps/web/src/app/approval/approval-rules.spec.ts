@@ -49,7 +49,7 @@ describe('decisionBlock', () => {
 });
 
 describe('issueBlock', () => {
-  const approved = { state: 'approved' as const, sheet: null };
+  const approved = { state: 'approved' as const, sheet: null, sequence: 1 };
 
   it('lets a lab manager or an analyst with a signing right issue an approved submission', () => {
     expect(issueBlock(approved, analyst)).toBeNull();
@@ -59,8 +59,15 @@ describe('issueBlock', () => {
   it('refuses an analyst without a signing right, a technician, and submissions not approved or already issued', () => {
     expect(issueBlock(approved, { ...analyst, holdsSigningRight: false })).toMatch(/no signing right/);
     expect(issueBlock(approved, { ...analyst, role: 'technician' })).toMatch(/lab manager, or an analyst/);
-    expect(issueBlock({ state: 'sent_back', sheet: null }, analyst)).toMatch(/Only an approved/);
-    expect(issueBlock({ state: 'approved', sheet: { id: uploader.id, reportNumber: 'BAL-2026-0003-R1', state: 'valid' } }, analyst)).toBe('Already issued as BAL-2026-0003-R1.');
+    expect(issueBlock({ state: 'sent_back', sheet: null, sequence: 1 }, analyst)).toMatch(/Only an approved/);
+    expect(issueBlock({ state: 'approved', sheet: { id: uploader.id, reportNumber: 'BAL-2026-0003-R1', state: 'valid' }, sequence: 1 }, analyst)).toBe('Already issued as BAL-2026-0003-R1.');
+  });
+
+  it('refuses older approved results once newer ones are approved, but not because of newer ones sent back', () => {
+    const others = [approved, { state: 'sent_back' as const, sequence: 2 }, { state: 'approved' as const, sequence: 3 }, { state: 'approved' as const, sequence: 4 }];
+    expect(issueBlock(approved, analyst, others)).toBe('Submission 3 was approved after this one, so its results are the ones to issue.');
+    expect(issueBlock({ ...approved, sequence: 4 }, analyst, others)).toBeNull();
+    expect(issueBlock(approved, analyst, [approved, { state: 'sent_back', sequence: 2 }])).toBeNull();
   });
 });
 

@@ -34,13 +34,20 @@ export function decisionBlock(submission: Pick<Submission, 'state' | 'reductions
   return null;
 }
 
-/** Why the caller may not issue the sheet of this submission, or null when they may. */
-export function issueBlock(submission: Pick<Submission, 'state' | 'sheet'>, caller: Caller): string | null {
+/**
+ * Why the caller may not issue the sheet of this submission, or null when they may. `others` are the test's
+ * submissions: results approved after these replace them, so only the newest approved ones can be issued.
+ */
+export function issueBlock(submission: Pick<Submission, 'state' | 'sheet' | 'sequence'>, caller: Caller, others: readonly Pick<Submission, 'state' | 'sequence'>[] = []): string | null {
   if (submission.state !== 'approved') {
     return 'Only an approved submission can be issued.';
   }
   if (submission.sheet) {
     return `Already issued as ${submission.sheet.reportNumber}.`;
+  }
+  const newer = others.filter((other) => other.state === 'approved' && other.sequence > submission.sequence).sort((a, b) => a.sequence - b.sequence)[0];
+  if (newer) {
+    return `Submission ${newer.sequence} was approved after this one, so its results are the ones to issue.`;
   }
   if (caller.role === 'lab_manager' || (caller.role === 'analyst' && caller.holdsSigningRight)) {
     return null;
