@@ -3,11 +3,13 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createHash } from 'node:crypto';
-import { PointExclusion, Reduction, ReductionPoint, ResultSheet, SigningRight, TestRecord } from '@tunnelwright/db';
+import { Organisation, PointExclusion, Reduction, ReductionPoint, ResultSheet, SigningRight, TestRecord } from '@tunnelwright/db';
 import { parse } from 'csv-parse/sync';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sampleReducedRun, sampleSubmission, type ReducedSample } from '../src/routes/approval-samples';
+import { ITEMS_TESTED_STATEMENT, REPRODUCTION_STATEMENT } from '../src/reports/render-result-sheet';
+import { formatDate } from '../src/reports/sheet-format';
 import { FixtureBuilder, type FixtureUser } from './support/fixtures';
 import { waitForMail } from './support/mailbox';
 import { createTestApp, type TestApp } from './support/test-app';
@@ -223,6 +225,29 @@ describe('approval workflow and certified sheets', () => {
       expect(text).toContain(analyst.name);
       expect(text).toMatch(/not design loads/i);
       expect(text).toMatch(/END OF REPORT/);
+    });
+
+    it('the sheet built from the records states each ISO/IEC 17025 §7.8.2.1 item of this test', async () => {
+      const dir = mkdtempSync(join(tmpdir(), 'tw-sheet-'));
+      writeFileSync(join(dir, 'sheet.pdf'), pdf);
+      // One line of words: pdftotext -layout breaks long fields across lines and columns.
+      const text = execFileSync('pdftotext', ['-layout', join(dir, 'sheet.pdf'), '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+      const test = await TestRecord.query().findById(world.testId).withGraphFetched('[article, tunnel, balance]').throwIfNotFound();
+      const organisation = await Organisation.query().findById(test.organisationId).throwIfNotFound();
+      const stored = await ResultSheet.query().findById(first.id).throwIfNotFound();
+      const data = stored.data as { dates: { receipt: string; testDates: string[]; issue: string }; method: { correctionMethods: string[]; engineVersion: string } };
+      expect(text).toContain('CERTIFIED RESULT SHEET'); // (a) title
+      expect(text).toContain(test.tunnel!.name); // (b) where the tests were done
+      expect(text).toContain(organisation.name); // (d) customer
+      expect(text).toContain(test.article!.name); // (f) identification of the item
+      expect(text).toContain(test.balance!.identifier); // (e) method: the balance
+      for (const line of data.method.correctionMethods) expect(text).toContain(line); // (e) corrections
+      expect(text).toContain(data.method.engineVersion); // (e) engine version
+      expect(data.dates.issue).toBe(first.issueDate); // (i) issue date, and the receipt and test dates, in the lab's zone
+      for (const date of [data.dates.receipt, ...data.dates.testDates, data.dates.issue]) expect(text).toContain(formatDate(date));
+      expect(text).toContain(ITEMS_TESTED_STATEMENT); // (k)
+      expect(text).toContain(REPRODUCTION_STATEMENT); // (o)
+      expect(text).toMatch(/U \(coverage factor k = 2/); // (n) results with their expanded uncertainty
     });
 
     it('a customer of another organisation sees nothing at all', async () => {

@@ -91,6 +91,19 @@ export function correctionMethods(config: ReductionConfig): string[] {
   return lines;
 }
 
+/**
+ * The corrections and density model as the sheet states them: plainly when every configuration was reduced the same
+ * way, otherwise each line names the configurations it applies to ("Configurations A, C: …").
+ */
+export function methodsStated(groups: readonly { corrections: readonly string[]; densityModel: string; codes: readonly string[] }[]): { correctionMethods: string[]; densityModel: string } {
+  if (groups.length === 1) return { correctionMethods: [...groups[0]!.corrections], densityModel: groups[0]!.densityModel };
+  const which = (codes: readonly string[]) => `${codes.length === 1 ? 'Configuration' : 'Configurations'} ${codes.join(', ')}`;
+  return {
+    correctionMethods: groups.flatMap((g) => g.corrections.map((line) => `${which(g.codes)}: ${line}`)),
+    densityModel: groups.map((g) => `${which(g.codes)}: ${g.densityModel}`).join('; '),
+  };
+}
+
 export function densityModelText(config: ReductionConfig): string {
   return config.densityModel === 'cipm-2007'
     ? 'CIPM-2007 moist-air density from barometric pressure, air temperature and relative humidity'
@@ -138,6 +151,8 @@ export async function buildSheetData(trx: Knex.Transaction, submission: Submissi
   const configurations: ResultConfiguration[] = [];
   const excludedPoints: ExcludedPoint[] = [];
   let firstConfig: ReductionConfig | undefined;
+  /** The configurations reduced with each distinct set of corrections and density model, in order of first use. */
+  const methodGroups: { corrections: string[]; densityModel: string; codes: string[] }[] = [];
   let engineVersion = '';
   for (const [i, run] of dataRuns.entries()) {
     const reduction = reductions.find((r) => r.runId === run.id);
@@ -151,6 +166,11 @@ export async function buildSheetData(trx: Knex.Transaction, submission: Submissi
       throw new Error(`reduction ${reduction.id} has points without a stored engine result`);
     }
     const code = configurationCode(i);
+    const corrections = correctionMethods(config);
+    const densityModel = densityModelText(config);
+    const group = methodGroups.find((g) => g.densityModel === densityModel && g.corrections.join('\n') === corrections.join('\n'));
+    if (group) group.codes.push(code);
+    else methodGroups.push({ corrections, densityModel, codes: [code] });
     const own = exclusions.filter((e) => e.reductionId === reduction.id);
     const excludedNumbers = new Set(own.map((e) => rows.find((r) => r.index === e.pointIndex)?.pointNumber).filter((n): n is number => n !== undefined));
     for (const e of own) {
@@ -221,8 +241,7 @@ export async function buildSheetData(trx: Knex.Transaction, submission: Submissi
     method: {
       documentedMethod: settings.documentedMethod ?? 'Force and moment measurement on a six-component balance, reduced to corrected coefficients',
       standardsFollowed: settings.standardsFollowed ?? ['ISO/IEC 17025:2017 (reporting)', 'JCGM 100:2008 (GUM) for the evaluation of uncertainty'],
-      correctionMethods: correctionMethods(firstConfig),
-      densityModel: densityModelText(firstConfig),
+      ...methodsStated(methodGroups),
       engineVersion: `Tunnelwright reduction engine ${engineVersion}`,
       uncertaintyMethod:
         'Combined standard uncertainty of systematic (type B) and random (type A, standard error of the mean) parts, expanded with k = 2 (about 95 % coverage)',
@@ -232,7 +251,7 @@ export async function buildSheetData(trx: Knex.Transaction, submission: Submissi
     article: {
       description: article.description || article.name,
       identification: `${article.name}; laboratory item ${article.id.slice(0, 8).toUpperCase()}`,
-      conditionOnReceipt: article.conditionOnReceipt || 'No damage or defect recorded on receipt',
+      conditionOnReceipt: article.conditionOnReceipt || 'Not recorded on receipt',
       referenceArea: firstConfig.article.referenceArea,
       referenceAreaKind: firstConfig.article.referenceAreaKind,
       referenceLength: firstConfig.article.referenceLength,
