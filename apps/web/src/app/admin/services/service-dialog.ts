@@ -1,19 +1,17 @@
-import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { FormControl, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
-import { MatButtonModule } from '@angular/material/button';
-import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MAT_DIALOG_DATA } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import type { Service, ServiceUnit, Tunnel } from '@tunnelwright/contracts';
 import { CatalogueApi } from '../../core/catalogue-api';
-import { problemFieldErrors, problemMessage } from '../../core/problem-message';
-import { ErrorBanner } from '../../shared/error-banner';
 import { fromMinorUnits, toMinorUnits } from '../../shared/money';
 import { numberErrorText } from '../../shared/number-error-text';
 import { serviceUnitLabels } from '../../shared/service-unit-labels';
-import { focusFirstInvalid } from '../../shared/focus-first-invalid';
+import { FormDialogLayout } from '../shared/form-dialog-layout';
+import { FormSubmission } from '../shared/form-submission';
+import { NameField } from '../shared/name-field';
 
 /** What the service dialog needs: the service being edited (or null) and the tunnels it may be tied to. */
 export interface ServiceDialogData {
@@ -27,16 +25,7 @@ export interface ServiceDialogData {
 @Component({
   selector: 'tw-service-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [
-    ReactiveFormsModule,
-    MatDialogModule,
-    MatFormFieldModule,
-    MatInputModule,
-    MatSelectModule,
-    MatButtonModule,
-    MatProgressBarModule,
-    ErrorBanner,
-  ],
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, FormDialogLayout, NameField],
   templateUrl: './service-dialog.html',
   styles: `
     .tw-form-grid {
@@ -48,9 +37,7 @@ export interface ServiceDialogData {
   `,
 })
 export class ServiceDialog {
-  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly api = inject(CatalogueApi);
-  private readonly dialogRef = inject<MatDialogRef<ServiceDialog, Service>>(MatDialogRef);
   private readonly data = inject<ServiceDialogData>(MAT_DIALOG_DATA);
 
   protected readonly service = this.data.service;
@@ -68,14 +55,11 @@ export class ServiceDialog {
     currency: [this.service?.currency ?? this.data.defaultCurrency ?? 'EUR', [Validators.required, Validators.pattern(/^[A-Z]{3}$/)]],
     tunnelId: new FormControl<string | null>(this.service?.tunnelId ?? null),
   });
-  protected readonly busy = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly submission = new FormSubmission(this.form, { failure: 'The service could not be saved.' });
 
   protected save(): void {
     this.form.controls.currency.setValue(this.form.controls.currency.value.trim().toUpperCase());
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      focusFirstInvalid(this.host.nativeElement);
+    if (!this.submission.checkValid()) {
       return;
     }
     const value = this.form.getRawValue();
@@ -87,23 +71,6 @@ export class ServiceDialog {
       currency: value.currency,
       tunnelId: value.tunnelId,
     };
-    this.busy.set(true);
-    this.error.set(null);
-    const request = this.service ? this.api.updateService(this.service.id, input) : this.api.createService(input);
-    request.subscribe({
-      next: (saved) => {
-        this.busy.set(false);
-        this.dialogRef.close(saved);
-      },
-      error: (error: unknown) => {
-        this.busy.set(false);
-        for (const field of problemFieldErrors(error)) {
-          const control = this.form.get(field.field);
-          control?.setErrors({ server: field.message });
-          control?.markAsTouched();
-        }
-        this.error.set(problemMessage(error, 'The service could not be saved.'));
-      },
-    });
+    this.submission.send(this.service ? this.api.updateService(this.service.id, input) : this.api.createService(input));
   }
 }

@@ -1,32 +1,21 @@
-import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
-import { MatButtonModule } from '@angular/material/button';
-import { MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { roleLabels, staffRoles, type Role } from '@tunnelwright/contracts';
-import { problemFieldErrors, problemMessage } from '../../core/problem-message';
+import { problemMessage } from '../../core/problem-message';
 import { ErrorBanner } from '../../shared/error-banner';
+import { FormDialogLayout } from '../shared/form-dialog-layout';
+import { FormSubmission } from '../shared/form-submission';
 import { UsersApi } from './users-api';
-import { focusFirstInvalid } from '../../shared/focus-first-invalid';
 
 /** Invites a person by e-mail; the role choices follow the kind of organisation chosen. Closes with the address. */
 @Component({
   selector: 'tw-invite-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [
-    ReactiveFormsModule,
-    MatDialogModule,
-    MatFormFieldModule,
-    MatInputModule,
-    MatSelectModule,
-    MatButtonModule,
-    MatProgressBarModule,
-    ErrorBanner,
-  ],
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, ErrorBanner, FormDialogLayout],
   templateUrl: './invite-dialog.html',
   styles: `
     form {
@@ -38,9 +27,7 @@ import { focusFirstInvalid } from '../../shared/focus-first-invalid';
   `,
 })
 export class InviteDialog {
-  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly api = inject(UsersApi);
-  private readonly dialogRef = inject<MatDialogRef<InviteDialog, string>>(MatDialogRef);
 
   protected readonly roleLabels = roleLabels;
   protected readonly organisations = rxResource({ stream: () => this.api.organisations() });
@@ -65,8 +52,7 @@ export class InviteDialog {
     }
     return chosen.kind === 'lab' ? staffRoles : ['customer'];
   });
-  protected readonly busy = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly submission = new FormSubmission(this.form, { failure: 'The invitation could not be sent.' });
 
   constructor() {
     this.form.controls.organisationId.valueChanges.subscribe(() => {
@@ -82,34 +68,14 @@ export class InviteDialog {
   }
 
   protected send(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      focusFirstInvalid(this.host.nativeElement);
+    if (!this.submission.checkValid()) {
       return;
     }
     const { email, name, organisationId, role } = this.form.getRawValue();
     if (!role) {
       return;
     }
-    this.busy.set(true);
-    this.error.set(null);
-    this.api.invite({ email: email.trim(), name: name.trim(), organisationId, role }).subscribe({
-      next: () => {
-        this.busy.set(false);
-        this.dialogRef.close(email.trim());
-      },
-      error: (error: unknown) => {
-        this.busy.set(false);
-        const fields = problemFieldErrors(error);
-        for (const field of fields) {
-          const control = this.form.get(field.field);
-          if (control) {
-            control.setErrors({ server: field.message });
-            control.markAsTouched();
-          }
-        }
-        this.error.set(problemMessage(error, 'The invitation could not be sent.'));
-      },
-    });
+    // The dialog closes with the address the invitation went to.
+    this.submission.send(this.api.invite({ email: email.trim(), name: name.trim(), organisationId, role }), () => email.trim());
   }
 }
