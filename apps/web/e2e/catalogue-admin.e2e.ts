@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { shots, useBrowserSuite } from './support/browser-suite';
+import { demoTunnels } from '../../../scripts/seed/catalogue';
+import { demoCustomers } from '../../../scripts/seed/demo-users';
 import { demoUser } from './support/sign-in';
 
 describe('catalogue administration', () => {
@@ -46,5 +48,20 @@ describe('catalogue administration', () => {
     await page.locator('tw-catalogue-page mat-progress-bar').waitFor({ state: 'detached' });
     expect(await page.locator('tw-catalogue-page').innerText()).not.toContain('Boundary-layer tunnel');
     expect(await page.locator('tw-catalogue-page').innerText()).toContain('licensed engineer');
+  });
+
+  it('a customer opens a tunnel’s free and busy week and sees another customer’s booking only as busy', async () => {
+    const page = await suite.signedIn(demoUser('customer', demoCustomers.tarnwick).email);
+    await page.locator('tw-catalogue-page mat-progress-bar').first().waitFor({ state: 'detached' });
+    const tunnel = demoTunnels[0]!.name;
+    const card = page.locator('mat-card').filter({ has: page.getByText(tunnel, { exact: true }) });
+    await card.getByRole('button', { name: 'Free and busy times' }).click();
+    // The demo has Quillfen's booking in test in this tunnel today.
+    const week = page.getByRole('region', { name: `Free and busy times of ${tunnel}` });
+    await week.locator('tw-calendar-grid').getByText('Busy').first().waitFor();
+    expect(await week.innerText()).not.toContain(demoCustomers.quillfen);
+    await page.screenshot({ path: `${shots}/catalogue-week.png`, fullPage: true });
+    await card.getByRole('button', { name: 'Hide free and busy times' }).press('Enter');
+    await week.waitFor({ state: 'detached' });
   });
 });

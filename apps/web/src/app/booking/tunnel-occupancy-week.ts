@@ -12,8 +12,8 @@ import { weekDays } from './calendar-days';
 import { CalendarEntry, CalendarGrid, type FreeSlot } from './calendar-grid';
 
 /**
- * One tunnel's week of free and busy time, for a customer choosing a period; others' bookings show only as busy.
- * A free stretch still to come can be chosen to fill in the period.
+ * One tunnel's week of free and busy time, for a customer choosing a period or reading the catalogue; others'
+ * bookings show only as busy. While `choosing`, a free stretch still to come can be chosen to fill in the period.
  */
 @Component({
   selector: 'tw-tunnel-occupancy-week',
@@ -32,8 +32,10 @@ import { CalendarEntry, CalendarGrid, type FreeSlot } from './calendar-grid';
     @if (loadError(); as message) {
       <tw-error-banner [message]="message" (retry)="occupancy.reload()" />
     }
-    <p class="hint">Choose a free stretch to make it the period below.</p>
-    <tw-calendar-grid [days]="days()" [lanes]="lanes()" [entries]="entries()" [timeZone]="timeZone()" [chooseFree]="true" (freeChosen)="freeChosen.emit($event)" />
+    @if (choosing()) {
+      <p class="hint">Choose a free stretch to make it the period below.</p>
+    }
+    <tw-calendar-grid [days]="days()" [lanes]="lanes()" [entries]="entries()" [timeZone]="timeZone()" [chooseFree]="choosing()" (freeChosen)="freeChosen.emit($event)" />
   `,
   styles: `
     .toolbar {
@@ -55,6 +57,8 @@ export class TunnelOccupancyWeek {
   readonly tunnelName = input.required<string>();
   /** The lab's IANA zone. */
   readonly timeZone = input.required<string>();
+  /** Whether a free stretch can be chosen (the request form); off where the week is only shown (the catalogue). */
+  readonly choosing = input(true);
   /** Emitted with the free stretch the customer chose for the period. */
   readonly freeChosen = output<FreeSlot>();
 

@@ -1,10 +1,14 @@
-import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { DecimalPipe } from '@angular/common';
+import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatChipsModule } from '@angular/material/chips';
+import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import type { Service, Tunnel } from '@tunnelwright/contracts';
+import { BookingApi } from '../booking/booking-api';
+import { TunnelOccupancyWeek } from '../booking/tunnel-occupancy-week';
 import { CatalogueApi } from '../core/catalogue-api';
 import { problemMessage } from '../core/problem-message';
 import { EmptyState } from '../shared/empty-state';
@@ -13,18 +17,28 @@ import { formatMoney } from '../shared/money';
 import { serviceUnitLabels } from '../shared/service-unit-labels';
 import { tunnelKindLabels } from '../shared/tunnel-kind-labels';
 
-/** Read-only list of the laboratory's tunnels and the services it offers, with rates. */
+/**
+ * Read-only list of the laboratory's tunnels and the services it offers, with rates. Each tunnel opens its week of
+ * free and busy time; other customers' bookings show only as busy, never by name.
+ */
 @Component({
   selector: 'tw-catalogue-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [DecimalPipe, MatCardModule, MatChipsModule, MatProgressBarModule, EmptyState, ErrorBanner],
+  imports: [DecimalPipe, MatButtonModule, MatCardModule, MatChipsModule, MatIconModule, MatProgressBarModule, EmptyState, ErrorBanner, TunnelOccupancyWeek],
   templateUrl: './catalogue-page.html',
   styleUrl: './catalogue-page.scss',
 })
 export class CataloguePage {
   private readonly api = inject(CatalogueApi);
 
+  private readonly bookings = inject(BookingApi);
+
   protected readonly tunnels = rxResource({ stream: () => this.api.tunnels() });
+  /** The lab's booking settings, for its time zone. */
+  private readonly settings = rxResource({ stream: () => this.bookings.settings() });
+  protected readonly labZone = computed(() => (this.settings.hasValue() ? this.settings.value().timeZone : null));
+  /** The tunnels whose free and busy week is open. */
+  protected readonly openWeeks = signal<ReadonlySet<string>>(new Set());
   protected readonly services = rxResource({ stream: () => this.api.services() });
 
   protected readonly kindLabels = tunnelKindLabels;
@@ -45,6 +59,14 @@ export class CataloguePage {
     const error = this.services.error();
     return error ? problemMessage(error.cause ?? error, 'The services could not be loaded.') : null;
   });
+
+  protected toggleWeek(tunnelId: string): void {
+    this.openWeeks.update((open) => {
+      const next = new Set(open);
+      if (!next.delete(tunnelId)) next.add(tunnelId);
+      return next;
+    });
+  }
 
   protected rate(service: Service): string {
     return `${formatMoney(service.rate, service.currency)} ${serviceUnitLabels[service.unit]}`;
