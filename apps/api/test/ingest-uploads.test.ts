@@ -95,6 +95,32 @@ describe('ingest: uploads, versions and the outbox', () => {
     });
   });
 
+  describe('GET /api/tests/:id calibration state', () => {
+    it('staff see the overdue version and then the override on record; customers get the test without either', async () => {
+      const testId = await w.newTest({ overdue: true });
+      const before = await request(w.t.app).get(`/api/tests/${testId}`).set(auth(w.technician.token));
+      expect(before.status).toBe(200);
+      expect(before.body.calibration).toMatchObject({ balanceIdentifier: expect.stringMatching(/^IB-/), calibration: { version: 1, calibratedOn: '2025-01-10', dueOn: '2025-07-10', overdue: true }, override: null });
+
+      const reason = 'Check loading on 2026-11-28 agreed within 0.1 %';
+      const granted = await request(w.t.app).post(`/api/tests/${testId}/calibration-overrides`).set(auth(w.labManager.token)).send({ reason });
+      expect(granted.status).toBe(201);
+      const after = await request(w.t.app).get(`/api/tests/${testId}`).set(auth(w.analyst.token));
+      expect(after.body.calibration.calibration.overdue).toBe(true);
+      expect(after.body.calibration.override).toMatchObject({ id: granted.body.id, reason, grantedBy: w.labManager.id, grantedByName: expect.any(String), calibrationId: after.body.calibration.calibration.id });
+
+      const customer = await request(w.t.app).get(`/api/tests/${testId}`).set(auth(w.customer.token));
+      expect(customer.status).toBe(200);
+      expect(customer.body).not.toHaveProperty('calibration');
+    });
+
+    it('a current calibration is not overdue and needs no override', async () => {
+      const testId = await w.newTest();
+      const response = await request(w.t.app).get(`/api/tests/${testId}`).set(auth(w.labManager.token));
+      expect(response.body.calibration).toMatchObject({ calibration: { dueOn: '2099-01-10', overdue: false }, override: null });
+    });
+  });
+
   describe('POST /api/runs/:id/reductions and compare', () => {
     it('a new version with other corrections; the old one is kept; compare gives the drag-count difference per point', async () => {
       const runId = await w.newRun();

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { testSchema } from './ingest';
+import { testCalibrationStateSchema, testSchema } from './ingest';
 
 /**
  * Review, approval and issue of certified result sheets, and their public verification.
@@ -183,3 +183,7 @@ export type TestProgress = z.infer<typeof testProgressSchema>;
 /** GET /api/tests and GET /api/tests/:id: the test with where it stands. */
 export const testWithProgressSchema = testSchema.extend({ progress: testProgressSchema });
 export type TestWithProgress = z.infer<typeof testWithProgressSchema>;
+
+/** GET /api/tests/:id: the test with where it stands and, for staff (null when the test names no balance), its calibration state. */
+export const testDetailSchema = testWithProgressSchema.extend({ calibration: testCalibrationStateSchema.nullable().optional() });
+export type TestDetail = z.infer<typeof testDetailSchema>;

@@ -80,6 +80,10 @@ export const calibrationSchema = z.object({
 });
 export type Calibration = z.infer<typeof calibrationSchema>;
 
+/** GET /api/balances/:id/calibrations: one version with the name of the lab manager who entered it. */
+export const calibrationVersionSchema = calibrationSchema.extend({ enteredByName: z.string() });
+export type CalibrationVersion = z.infer<typeof calibrationVersionSchema>;
+
 export const balanceSchema = balanceInputSchema.extend({
   id: z.uuid(),
   currentCalibration: calibrationSchema.nullable(),
@@ -92,6 +96,31 @@ export type Balance = z.infer<typeof balanceSchema>;
 export const calibrationOverrideInputSchema = z.object({
   reason: text(2000).min(10, { message: 'Explain the reason in at least 10 characters' }),
 });
+
+/** A lab manager's recorded override of an overdue calibration for one test. */
+export const calibrationOverrideSchema = z.object({
+  id: z.uuid(),
+  testId: z.uuid(),
+  calibrationId: z.uuid(),
+  reason: z.string(),
+  grantedBy: z.uuid(),
+  createdAt: z.iso.datetime(),
+});
+export type CalibrationOverrideView = z.infer<typeof calibrationOverrideSchema>;
+
+/**
+ * Staff's view of the calibration a test's runs are reduced with: the balance, its current version and whether it is
+ * past due, and the override on record for that version, if any.
+ */
+export const testCalibrationStateSchema = z.object({
+  balanceId: z.uuid(),
+  balanceIdentifier: z.string(),
+  /** The balance's newest calibration; null when it has none yet. */
+  calibration: z.object({ id: z.uuid(), version: z.number().int(), calibratedOn: z.string(), dueOn: z.string(), overdue: z.boolean() }).nullable(),
+  /** The override of this test for the current version, once a lab manager has recorded one. */
+  override: calibrationOverrideSchema.extend({ grantedByName: z.string() }).nullable(),
+});
+export type TestCalibrationState = z.infer<typeof testCalibrationStateSchema>;
 
 export const testStateSchema = z.enum(['planned', 'running', 'complete', 'cancelled']);
 export type TestState = z.infer<typeof testStateSchema>;

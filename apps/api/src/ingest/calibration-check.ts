@@ -1,4 +1,5 @@
-import { BalanceCalibration, CalibrationOverride, type TestRecord } from '@tunnelwright/db';
+import type { TestCalibrationState } from '@tunnelwright/contracts';
+import { Balance, BalanceCalibration, CalibrationOverride, User, type TestRecord } from '@tunnelwright/db';
 import type { Knex } from 'knex';
 import { HttpError } from '../errors/http-error';
 
@@ -40,4 +41,35 @@ export async function requireUsableCalibration(knex: Knex, test: TestRecord, now
     `Calibration version ${calibration.version} of balance ${balance} was due on ${calibration.dueOn}, so runs of this test cannot be reduced. ` +
       'Recalibrate the balance, or ask a lab manager to record an override with a reason (POST /api/tests/:id/calibration-overrides).',
   );
+}
+
+/**
+ * Where a test's balance calibration stands, for staff: the current version, whether it is past due, and the override
+ * of this test for that version if one is on record. Null when the test names no balance.
+ */
+export async function testCalibrationState(knex: Knex, test: TestRecord, now: Date = new Date()): Promise<TestCalibrationState | null> {
+  if (!test.balanceId) return null;
+  const balance = await Balance.query(knex).findById(test.balanceId);
+  if (!balance) return null;
+  const calibration = await currentCalibration(knex, balance.id);
+  const override = calibration ? await CalibrationOverride.query(knex).findOne({ testId: test.id, calibrationId: calibration.id }) : undefined;
+  const grantedBy = override ? await User.query(knex).findById(override.grantedBy) : undefined;
+  return {
+    balanceId: balance.id,
+    balanceIdentifier: balance.identifier,
+    calibration: calibration
+      ? { id: calibration.id, version: calibration.version, calibratedOn: calibration.calibratedOn, dueOn: calibration.dueOn, overdue: isOverdue(calibration, now) }
+      : null,
+    override: override
+      ? {
+          id: override.id,
+          testId: override.testId,
+          calibrationId: override.calibrationId,
+          reason: override.reason,
+          grantedBy: override.grantedBy,
+          grantedByName: grantedBy?.name ?? '',
+          createdAt: override.createdAt.toISOString(),
+        }
+      : null,
+  };
 }

@@ -1,5 +1,5 @@
 import { balanceInputSchema, calibrationInputSchema } from '@tunnelwright/contracts';
-import { Balance, BalanceCalibration, recordAudit } from '@tunnelwright/db';
+import { Balance, BalanceCalibration, recordAudit, User } from '@tunnelwright/db';
 import { HttpError } from '../errors/http-error';
 import { currentCalibration } from '../ingest/calibration-check';
 import { toBalance, toCalibration } from '../ingest/ingest-presenters';
@@ -71,12 +71,15 @@ export const balanceRoutes: RouteDef[] = [
     method: 'get',
     path: '/:id/calibrations',
     access: staff,
-    summary: 'Every calibration version of a balance, newest first',
+    summary: 'Every calibration version of a balance, newest first, with who entered it',
     sample: { params: async (f) => ({ id: await sampleBalanceId(f) }), expect: 200 },
     handler: async ({ params, res }) => {
       const balance = await Balance.query().findById(params.id ?? '');
       if (!balance) throw HttpError.notFound('The balance');
-      res.json((await BalanceCalibration.query().where('balanceId', balance.id).orderBy('version', 'desc')).map(toCalibration));
+      const calibrations = await BalanceCalibration.query().where('balanceId', balance.id).orderBy('version', 'desc');
+      const people = await User.query().whereIn('id', [...new Set(calibrations.map((c) => c.enteredBy))]).select('id', 'name');
+      const names = new Map(people.map((person) => [person.id, person.name]));
+      res.json(calibrations.map((c) => ({ ...toCalibration(c), enteredByName: names.get(c.enteredBy) ?? '' })));
     },
   }),
   route({

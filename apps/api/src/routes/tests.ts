@@ -4,7 +4,7 @@ import type { Knex } from 'knex';
 import { UniqueViolationError } from 'objection';
 import { testProgress } from '../approval/test-progress';
 import { HttpError } from '../errors/http-error';
-import { currentCalibration, isOverdue } from '../ingest/calibration-check';
+import { currentCalibration, isOverdue, testCalibrationState } from '../ingest/calibration-check';
 import { toRun, toTest } from '../ingest/ingest-presenters';
 import { sampleTestBody, sampleTestId } from './ingest-samples';
 import { route, type RouteDef } from './route';
@@ -48,11 +48,17 @@ export const testRoutes: RouteDef[] = [
     method: 'get',
     path: '/:id',
     access: 'authenticated',
-    summary: 'One test',
+    summary: 'One test (staff also get where its balance calibration stands and any override on record)',
     sample: { params: async (f) => ({ id: await sampleTestId(f) }), expect: 200, crossOrganisation: true },
     handler: async ({ caller, params, res, deps }) => {
       const test = await visibleTest(caller, params.id ?? '');
-      res.json({ ...toTest(test), progress: (await testProgress(deps.knex, [test])).get(test.id) });
+      const progress = (await testProgress(deps.knex, [test])).get(test.id);
+      // The calibration and override reason are the lab's own records; customers see their test without them.
+      if (caller.role === 'customer') {
+        res.json({ ...toTest(test), progress });
+        return;
+      }
+      res.json({ ...toTest(test), progress, calibration: await testCalibrationState(deps.knex, test) });
     },
   }),
   route({
