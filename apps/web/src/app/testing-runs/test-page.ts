@@ -15,16 +15,18 @@ import { problemMessage } from '../core/problem-message';
 import { SafetyNotice } from '../core/safety-notice';
 import { EmptyState } from '../shared/empty-state';
 import { ErrorBanner } from '../shared/error-banner';
+import { CalibrationNotice } from './calibration-notice';
 import { CdYawChart } from './cd-yaw-chart';
 import { IngestApi } from './ingest-api';
 import { loadRunOverviews } from './run-overview';
 import { reductionStateLabels, runKindLabels, testStateLabels } from './run-labels';
+import { TestDetailApi } from './test-detail-api';
 
 /** One test: its runs with kind, newest reduction state, point count, warnings and a C_D-versus-yaw sketch. */
 @Component({
   selector: 'tw-test-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [RouterLink, MatButtonModule, MatChipsModule, MatIconModule, MatProgressBarModule, MatTableModule, CdYawChart, EmptyState, ErrorBanner, SafetyNotice, ApprovalPanel, TestAuditPanel],
+  imports: [RouterLink, MatButtonModule, MatChipsModule, MatIconModule, MatProgressBarModule, MatTableModule, CdYawChart, EmptyState, ErrorBanner, SafetyNotice, ApprovalPanel, TestAuditPanel, CalibrationNotice],
   templateUrl: './test-page.html',
   styles: `
     :host {
@@ -57,13 +59,14 @@ export class TestPage {
   readonly id = input.required<string>();
 
   private readonly api = inject(IngestApi);
+  private readonly detailApi = inject(TestDetailApi);
   private readonly role = inject(AuthService).role;
 
   /** Whether the caller is laboratory staff (customers see runs, not reductions, until approval). */
   protected readonly isStaff = computed(() => this.role() !== 'customer' && this.role() !== null);
   protected readonly isLabManager = computed(() => this.role() === 'lab_manager');
   protected readonly isTechnician = computed(() => this.role() === 'technician' || this.role() === 'lab_manager');
-  protected readonly test = rxResource({ params: () => this.id(), stream: ({ params }) => this.api.test(params) });
+  protected readonly test = rxResource({ params: () => this.id(), stream: ({ params }) => this.detailApi.test(params) });
   protected readonly runs = rxResource({
     params: () => ({ id: this.id(), staff: this.isStaff() }),
     stream: ({ params }) => loadRunOverviews(this.api, params.id, params.staff),
@@ -89,7 +92,10 @@ export class TestPage {
   protected readonly message = (error: unknown, what: string) => problemMessage(error, `The ${what} could not be loaded.`);
   private readonly auditPanel = viewChild(TestAuditPanel);
 
-  /** After a submission, decision or issue: where the test stands and its audit trail have changed. */
+  /** Staff's view of the test's balance calibration (the API sends none to customers). */
+  protected readonly calibration = computed(() => (this.test.hasValue() ? (this.test.value().calibration ?? null) : null));
+
+  /** After a submission, decision, issue or calibration override: where the test stands and its audit trail have changed. */
   protected approvalChanged(): void {
     this.test.reload();
     this.auditPanel()?.reload();
