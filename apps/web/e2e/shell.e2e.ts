@@ -8,7 +8,7 @@ const expectedNav: Record<Role, string[]> = {
   customer: ['Catalogue', 'Test planner', 'My bookings', 'Tests', 'Documents'],
   technician: ['Catalogue', 'My tunnel time', 'Tests', 'Documents'],
   analyst: ['Catalogue', 'Test planner', 'Tests', 'Documents'],
-  lab_manager: ['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Booking rules', 'Audit log', 'Dev mailbox'],
+  lab_manager: ['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Balances', 'Booking rules', 'Audit log', 'Dev mailbox'],
 };
 
 describe('signed-in shell', () => {

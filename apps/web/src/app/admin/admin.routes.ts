@@ -19,6 +19,11 @@ export const adminRoutes: Routes = [
     loadComponent: () => import('./services/services-page').then((m) => m.ServicesPage),
   },
   {
+    path: 'balances',
+    title: 'Balances · Tunnelwright',
+    loadComponent: () => import('./balances/balances-page').then((m) => m.BalancesPage),
+  },
+  {
     path: 'signing-rights',
     title: 'Signing rights · Tunnelwright',
     loadComponent: () => import('./signing-rights/signing-rights-page').then((m) => m.SigningRightsPage),

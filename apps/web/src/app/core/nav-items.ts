@@ -33,6 +33,7 @@ export const navItemsByRole: Readonly<Record<Role, readonly NavItem[]>> = {
     { label: 'Signing rights', path: '/admin/signing-rights', icon: 'draw' },
     { label: 'Tunnels', path: '/admin/tunnels', icon: 'air' },
     { label: 'Services', path: '/admin/services', icon: 'sell' },
+    { label: 'Balances', path: '/admin/balances', icon: 'balance' },
     { label: 'Booking rules', path: '/booking-rules', icon: 'rule' },
     { label: 'Audit log', path: '/admin/audit', icon: 'history' },
     { label: 'Dev mailbox', path: '/dev-mailbox', icon: 'mail', demoOnly: true },
