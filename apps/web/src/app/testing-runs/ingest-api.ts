@@ -77,13 +77,14 @@ export class IngestApi {
     return this.http.post<Run>(`/api/tests/${testId}/runs`, input);
   }
 
-  preview(file: File): Observable<Preview> {
-    return this.http.post<Preview>('/api/runs/preview', fileForm(file));
+  /** Checks a file without keeping it, read through the saved import profile `profileId` when one is given. */
+  preview(file: File, profileId?: string): Observable<Preview> {
+    return this.http.post<Preview>('/api/runs/preview', fileForm(file, profileId));
   }
 
-  /** Sends a raw file to a run, reporting the share of bytes sent. */
-  upload(runId: string, file: File): Observable<UploadEvent> {
-    return this.http.post<UploadResult>(`/api/runs/${runId}/files`, fileForm(file), { reportProgress: true, observe: 'events' }).pipe(
+  /** Sends a raw file to a run, reporting the share of bytes sent; `profileId` names the import profile to read it with. */
+  upload(runId: string, file: File, profileId?: string): Observable<UploadEvent> {
+    return this.http.post<UploadResult>(`/api/runs/${runId}/files`, fileForm(file, profileId), { reportProgress: true, observe: 'events' }).pipe(
       filter((event: HttpEvent<UploadResult>) => event.type === HttpEventType.UploadProgress || event.type === HttpEventType.Response),
       map((event): UploadEvent => {
         if (event.type === HttpEventType.UploadProgress) {
@@ -123,8 +124,9 @@ export class IngestApi {
   }
 }
 
-function fileForm(file: File): FormData {
+function fileForm(file: File, profileId?: string): FormData {
   const form = new FormData();
+  if (profileId) form.append('profileId', profileId);
   form.append('file', file, file.name);
   return form;
 }

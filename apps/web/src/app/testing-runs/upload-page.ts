@@ -11,6 +11,7 @@ import type { Run } from '@tunnelwright/contracts';
 import { from, mergeMap } from 'rxjs';
 import { problemMessage, problemStatus } from '../core/problem-message';
 import { SafetyNotice } from '../core/safety-notice';
+import { ImportProfilesApi } from '../import-profiles/import-profiles-api';
 import { ErrorBanner } from '../shared/error-banner';
 import { FileDropZone } from '../shared/file-drop-zone';
 import { IngestApi } from './ingest-api';
@@ -59,6 +60,10 @@ interface DuplicateProblem {
     section {
       margin-bottom: 24px;
     }
+    .read-with {
+      display: block;
+      max-width: 420px;
+    }
     .actions {
       display: flex;
       gap: 16px;
@@ -72,11 +77,17 @@ export class UploadPage {
   readonly id = input.required<string>();
 
   private readonly api = inject(IngestApi);
+  private readonly profilesApi = inject(ImportProfilesApi);
   private nextKey = 1;
 
   protected readonly test = rxResource({ params: () => this.id(), stream: ({ params }) => this.api.test(params) });
   protected readonly runs = rxResource({ params: () => this.id(), stream: ({ params }) => this.api.runs(params) });
   protected readonly runId = signal<string | null>(null);
+  /** The saved, unarchived import profiles a file may be read with. */
+  protected readonly profiles = rxResource({ stream: () => this.profilesApi.list(false) });
+  protected readonly profileChoices = computed(() => (this.profiles.hasValue() ? this.profiles.value() : []));
+  /** The import profile the files are checked and uploaded with; null for the standard run-file format. */
+  protected readonly profileId = signal<string | null>(null);
   protected readonly items = signal<readonly UploadItem[]>([]);
   protected readonly title = computed(() => (this.test.hasValue() ? this.test.value().title : 'Test'));
   protected readonly configurations = computed(() => (this.test.hasValue() ? this.test.value().configurations.map((c) => c.label) : []));
@@ -84,6 +95,14 @@ export class UploadPage {
   protected readonly busy = computed(() => this.items().some((item) => item.phase === 'uploading' || item.phase === 'checking'));
   protected readonly kindLabels = runKindLabels;
   protected readonly message = (error: unknown, what: string) => problemMessage(error, `The ${what} could not be loaded.`);
+
+  /** Reads every file not yet sent again with the newly chosen profile, so what is uploaded is what was checked. */
+  protected readWith(profileId: string | null): void {
+    this.profileId.set(profileId);
+    for (const item of this.items()) {
+      if (item.phase === 'checked' || item.phase === 'check-failed') this.check(item.key, item.file);
+    }
+  }
 
   protected runCreated(run: Run): void {
     this.runs.update((runs) => [...(runs ?? []), run]);
@@ -95,11 +114,16 @@ export class UploadPage {
     for (const file of files) {
       const key = this.nextKey++;
       this.items.update((items) => [...items, { key, file, phase: 'checking', preview: null, progress: 0, message: '', reductionId: null, existingRunId: null }]);
-      this.api.preview(file).subscribe({
-        next: (preview) => this.patch(key, { phase: 'checked', preview, message: preview.valid ? '' : `${preview.issues.length} issue(s) found` }),
-        error: (error: unknown) => this.patch(key, { phase: 'check-failed', message: problemMessage(error, 'The file could not be checked.') }),
-      });
+      this.check(key, file);
     }
+  }
+
+  private check(key: number, file: File): void {
+    this.patch(key, { phase: 'checking', preview: null, message: '' });
+    this.api.preview(file, this.profileId() ?? undefined).subscribe({
+      next: (preview) => this.patch(key, { phase: 'checked', preview, message: preview.valid ? '' : `${preview.issues.length} issue(s) found` }),
+      error: (error: unknown) => this.patch(key, { phase: 'check-failed', message: problemMessage(error, 'The file could not be checked.') }),
+    });
   }
 
   protected removeItem(key: number): void {
@@ -119,7 +143,7 @@ export class UploadPage {
 
   private sendOne(runId: string, item: UploadItem) {
     return new Promise<void>((done) => {
-      this.api.upload(runId, item.file).subscribe({
+      this.api.upload(runId, item.file, this.profileId() ?? undefined).subscribe({
         next: (event) => {
           if (event.kind === 'progress') {
             this.patch(item.key, { progress: event.fraction });
