@@ -61,6 +61,11 @@ export const routes: Routes = [
         loadChildren: () => import('./testing-runs/testing-runs.routes').then((m) => m.testingRunsRoutes),
       },
       {
+        path: 'import-profiles',
+        canActivate: [roleGuard(['technician', 'analyst', 'lab_manager'])],
+        loadChildren: () => import('./import-profiles/import-profiles.routes').then((m) => m.importProfileRoutes),
+      },
+      {
         path: 'documents',
         title: 'Documents · Tunnelwright',
         loadComponent: () => import('./documents/documents-page').then((m) => m.DocumentsPage),

@@ -7,20 +7,20 @@ describe('navItemsFor', () => {
     expect(navItemsFor(null, true)).toEqual([]);
   });
 
-  it('shows a technician the catalogue, their tunnel time, the tests and the documents', () => {
-    expect(labels('technician', true)).toEqual(['Catalogue', 'My tunnel time', 'Tests', 'Documents']);
+  it('shows a technician the catalogue, their tunnel time, the tests, the import profiles and the documents', () => {
+    expect(labels('technician', true)).toEqual(['Catalogue', 'My tunnel time', 'Tests', 'Import profiles', 'Documents']);
   });
 
   it('shows a customer the catalogue, the test planner, their bookings, their tests and their documents', () => {
     expect(labels('customer', true)).toEqual(['Catalogue', 'Test planner', 'My bookings', 'Tests', 'Documents']);
   });
 
-  it('shows an analyst the catalogue, the test planner, the tests and the documents', () => {
-    expect(labels('analyst', true)).toEqual(['Catalogue', 'Test planner', 'Tests', 'Documents']);
+  it('shows an analyst the catalogue, the test planner, the tests, the import profiles and the documents', () => {
+    expect(labels('analyst', true)).toEqual(['Catalogue', 'Test planner', 'Tests', 'Import profiles', 'Documents']);
   });
 
   it('shows a lab manager the administration sections, signing rights among them, and, in demo mode, the dev mailbox', () => {
-    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Balances', 'Booking rules', 'Audit log', 'Dev mailbox']);
+    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Import profiles', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Balances', 'Booking rules', 'Audit log', 'Dev mailbox']);
   });
 
   it('gives every role the documents, which lead to the issued result sheets', () => {
