@@ -22,6 +22,15 @@ describe('/api/organisations', () => {
       expect(response.body[0].kind).toBe('lab');
       expect(response.body.slice(1).every((o: { kind: string }) => o.kind === 'customer')).toBe(true);
     });
+
+    it('technician → 200, since staff open tests for a customer; customer → 403', async () => {
+      const technician = await fixtures.user({ role: 'technician' });
+      const customer = await fixtures.user({ role: 'customer' });
+      const asTechnician = await request(t.app).get('/api/organisations').set('Authorization', `Bearer ${technician.token}`);
+      expect(asTechnician.status).toBe(200);
+      expect(asTechnician.body.some((o: { id: string }) => o.id === customer.organisationId)).toBe(true);
+      expect((await request(t.app).get('/api/organisations').set('Authorization', `Bearer ${customer.token}`)).status).toBe(403);
+    });
   });
 
   describe('GET /:id', () => {

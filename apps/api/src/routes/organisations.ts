@@ -9,8 +9,9 @@ export const organisationRoutes: RouteDef[] = [
   route({
     method: 'get',
     path: '/',
-    access: ['lab_manager'],
-    summary: 'List organisations, the lab first',
+    // Technicians and analysts open tests and record articles for a customer, so they choose from this list too.
+    access: ['technician', 'analyst', 'lab_manager'],
+    summary: 'List organisations, the lab first (staff)',
     sample: { expect: 200 },
     handler: async ({ res }) => {
       const organisations = await Organisation.query().orderByRaw("kind = 'lab' desc").orderBy('name');
