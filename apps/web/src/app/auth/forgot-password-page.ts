@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -7,9 +7,9 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import { problemMessage, problemStatus } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
+import { PageSubmission } from '../shared/page-submission';
 import { AccountApi } from './account-api';
 import { AuthFrame } from './auth-frame';
-import { focusFirstInvalid } from '../shared/focus-first-invalid';
 
 /** Asks for a password-reset e-mail. The answer is the same whether or not the address has an account. */
 @Component({
@@ -34,10 +34,10 @@ import { focusFirstInvalid } from '../shared/focus-first-invalid';
         </p>
         <a mat-button routerLink="/sign-in">Back to sign-in</a>
       } @else {
-        @if (busy()) {
+        @if (submission.busy()) {
           <mat-progress-bar mode="indeterminate" aria-label="Sending" />
         }
-        @if (error(); as message) {
+        @if (submission.error(); as message) {
           <tw-error-banner [message]="message" (retry)="submit()" />
         }
         <p class="tw-muted">Enter the e-mail you sign in with and we will send you a link to choose a new password.</p>
@@ -53,7 +53,7 @@ import { focusFirstInvalid } from '../shared/focus-first-invalid';
           </mat-form-field>
           <div class="actions">
             <a routerLink="/sign-in">Back to sign-in</a>
-            <button mat-flat-button type="submit" [disabled]="busy()">Send link</button>
+            <button mat-flat-button type="submit" [disabled]="submission.busy()">Send link</button>
           </div>
         </form>
       }
@@ -69,35 +69,20 @@ import { focusFirstInvalid } from '../shared/focus-first-invalid';
   `,
 })
 export class ForgotPasswordPage {
-  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly api = inject(AccountApi);
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     email: ['', [Validators.required, Validators.email]],
   });
-  protected readonly busy = signal(false);
   protected readonly sent = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly submission = new PageSubmission(this.form, (error) =>
+    problemStatus(error) === 429 ? 'Too many requests from here. Try again in a few minutes.' : problemMessage(error),
+  );
 
   protected submit(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      focusFirstInvalid(this.host.nativeElement);
-      return;
-    }
-    this.busy.set(true);
-    this.error.set(null);
-    this.api.forgotPassword({ email: this.form.controls.email.value.trim() }).subscribe({
-      next: () => {
-        this.busy.set(false);
-        this.sent.set(true);
-      },
-      error: (error: unknown) => {
-        this.busy.set(false);
-        this.error.set(
-          problemStatus(error) === 429 ? 'Too many requests from here. Try again in a few minutes.' : problemMessage(error),
-        );
-      },
-    });
+    this.submission.send(
+      () => this.api.forgotPassword({ email: this.form.controls.email.value.trim() }),
+      () => this.sent.set(true),
+    );
   }
 }

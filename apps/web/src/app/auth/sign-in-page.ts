@@ -1,5 +1,5 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, ElementRef, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, input } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -9,9 +9,9 @@ import { Router, RouterLink } from '@angular/router';
 import { AuthService } from '../core/auth-service';
 import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
+import { PageSubmission } from '../shared/page-submission';
 import { AuthFrame } from './auth-frame';
 import { retryAfterText } from './retry-after-text';
-import { focusFirstInvalid } from '../shared/focus-first-invalid';
 
 /** E-mail and password sign-in. */
 @Component({
@@ -44,7 +44,6 @@ import { focusFirstInvalid } from '../shared/focus-first-invalid';
   `,
 })
 export class SignInPage {
-  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly auth = inject(AuthService);
   private readonly router = inject(Router);
 
@@ -55,30 +54,20 @@ export class SignInPage {
     email: ['', [Validators.required, Validators.email, Validators.maxLength(254)]],
     password: ['', [Validators.required, Validators.maxLength(256)]],
   });
-  protected readonly busy = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly submission = new PageSubmission(this.form, (error) => this.describe(error));
 
   protected submit(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      focusFirstInvalid(this.host.nativeElement);
-      return;
-    }
-    this.busy.set(true);
-    this.error.set(null);
-    const { email, password } = this.form.getRawValue();
-    this.auth.signIn({ email: email.trim(), password }).subscribe({
-      next: () => {
-        this.busy.set(false);
+    this.submission.send(
+      () => {
+        const { email, password } = this.form.getRawValue();
+        return this.auth.signIn({ email: email.trim(), password });
+      },
+      () => {
         const target = this.returnUrl();
         // Only follow local paths, so a crafted link cannot send the user elsewhere.
         void this.router.navigateByUrl(target && target.startsWith('/') && !target.startsWith('//') ? target : '/');
       },
-      error: (error: unknown) => {
-        this.busy.set(false);
-        this.error.set(this.describe(error));
-      },
-    });
+    );
   }
 
   private describe(error: unknown): string {

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
@@ -8,11 +8,10 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { roleLabels } from '@tunnelwright/contracts';
 import { AuthService } from '../core/auth-service';
-import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
+import { PageSubmission } from '../shared/page-submission';
 import { ChangePasswordForm } from './change-password-form';
 import { ProfileApi } from './profile-api';
-import { focusFirstInvalid } from '../shared/focus-first-invalid';
 
 /** The signed-in user's name, and a way to change their password. */
 @Component({
@@ -50,7 +49,6 @@ import { focusFirstInvalid } from '../shared/focus-first-invalid';
   `,
 })
 export class ProfilePage {
-  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly auth = inject(AuthService);
   private readonly api = inject(ProfileApi);
   private readonly snackBar = inject(MatSnackBar);
@@ -63,28 +61,16 @@ export class ProfilePage {
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: [this.auth.user()?.name ?? '', [Validators.required, Validators.maxLength(120)]],
   });
-  protected readonly busy = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly submission = new PageSubmission(this.form);
 
   protected save(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      focusFirstInvalid(this.host.nativeElement);
-      return;
-    }
-    this.busy.set(true);
-    this.error.set(null);
-    this.api.update({ name: this.form.controls.name.value.trim() }).subscribe({
-      next: (user) => {
-        this.busy.set(false);
+    this.submission.send(
+      () => this.api.update({ name: this.form.controls.name.value.trim() }),
+      (user) => {
         this.auth.updateUser(user);
         this.form.markAsPristine();
         this.snackBar.open('Your name has been saved.', undefined, { duration: 4000 });
       },
-      error: (error: unknown) => {
-        this.busy.set(false);
-        this.error.set(problemMessage(error));
-      },
-    });
+    );
   }
 }
