@@ -1,0 +1,91 @@
+import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSelectModule } from '@angular/material/select';
+import type { Article, ArticleKind, Organisation, ReferenceAreaKind } from '@tunnelwright/contracts';
+import { problemFieldErrors, problemMessage } from '../core/problem-message';
+import { ErrorBanner } from '../shared/error-banner';
+import { focusFirstInvalid } from '../shared/focus-first-invalid';
+import { numberErrorText } from '../shared/number-error-text';
+import { articleControlName, articleInputFrom, articleKindLabels, buildArticleForm, referenceAreaKindLabels } from './article-form';
+import { TestSetupApi } from './test-setup-api';
+
+/** What the article dialog edits: an existing article, or a new one for the given organisation. */
+export interface ArticleDialogData {
+  readonly article: Article | null;
+  /** The customer organisations to choose from. */
+  readonly customers: readonly Organisation[];
+  /** The organisation a new article starts with ('' to let staff choose). */
+  readonly organisationId: string;
+  /** Whether the organisation is fixed, e.g. when recording an article while opening a test for that customer. */
+  readonly organisationFixed?: boolean;
+}
+
+/** Records a test article received from a customer, or edits one. Closes with the saved article. */
+@Component({
+  selector: 'tw-article-dialog',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule, MatProgressBarModule, ErrorBanner],
+  templateUrl: './article-dialog.html',
+  styles: `
+    .section {
+      font: var(--mat-sys-title-small);
+      margin: 8px 0 4px;
+    }
+    .tw-form-grid {
+      padding-top: 8px;
+    }
+    .wide {
+      grid-column: 1 / -1;
+    }
+  `,
+})
+export class ArticleDialog {
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
+  private readonly api = inject(TestSetupApi);
+  private readonly dialogRef = inject<MatDialogRef<ArticleDialog, Article>>(MatDialogRef);
+
+  protected readonly data = inject<ArticleDialogData>(MAT_DIALOG_DATA);
+  protected readonly article = this.data.article;
+  protected readonly form = buildArticleForm(inject(NonNullableFormBuilder), this.article, this.data.organisationId);
+  protected readonly kinds = Object.entries(articleKindLabels) as [ArticleKind, string][];
+  protected readonly areaKinds = Object.entries(referenceAreaKindLabels) as [ReferenceAreaKind, string][];
+  protected readonly numberError = numberErrorText;
+  protected readonly busy = signal(false);
+  protected readonly error = signal<string | null>(null);
+
+  constructor() {
+    if (this.data.organisationFixed) this.form.controls.organisationId.disable();
+  }
+
+  protected save(): void {
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      focusFirstInvalid(this.host.nativeElement);
+      return;
+    }
+    const input = articleInputFrom(this.form);
+    this.busy.set(true);
+    this.error.set(null);
+    const request = this.article ? this.api.updateArticle(this.article.id, input) : this.api.createArticle(input);
+    request.subscribe({
+      next: (saved) => {
+        this.busy.set(false);
+        this.dialogRef.close(saved);
+      },
+      error: (error: unknown) => {
+        this.busy.set(false);
+        for (const field of problemFieldErrors(error)) {
+          const control = this.form.get(articleControlName(field.field));
+          control?.setErrors({ server: field.message });
+          control?.markAsTouched();
+        }
+        this.error.set(problemMessage(error, 'The test article could not be saved.'));
+      },
+    });
+  }
+}
