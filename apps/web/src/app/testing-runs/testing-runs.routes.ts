@@ -9,6 +9,24 @@ export const testingRunsRoutes: Routes = [
     loadComponent: () => import('./tests-page').then((m) => m.TestsPage),
   },
   {
+    path: 'tests/new',
+    title: 'Open a test · Tunnelwright',
+    canActivate: [roleGuard(['technician', 'analyst', 'lab_manager'])],
+    loadComponent: () => import('./test-form-page').then((m) => m.TestFormPage),
+  },
+  {
+    path: 'tests/:id/edit',
+    title: 'Edit test · Tunnelwright',
+    canActivate: [roleGuard(['technician', 'analyst', 'lab_manager'])],
+    loadComponent: () => import('./test-form-page').then((m) => m.TestFormPage),
+  },
+  {
+    path: 'articles',
+    title: 'Test articles · Tunnelwright',
+    canActivate: [roleGuard(['technician', 'analyst', 'lab_manager'])],
+    loadComponent: () => import('./articles-page').then((m) => m.ArticlesPage),
+  },
+  {
     path: 'tests/:id',
     title: 'Test · Tunnelwright',
     loadComponent: () => import('./test-page').then((m) => m.TestPage),
