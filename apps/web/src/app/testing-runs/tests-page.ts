@@ -1,5 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
 import { MatListModule } from '@angular/material/list';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
@@ -16,9 +18,14 @@ import { testStateLabels } from './run-labels';
 @Component({
   selector: 'tw-tests-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [RouterLink, MatListModule, MatProgressBarModule, EmptyState, ErrorBanner, SafetyNotice],
+  imports: [RouterLink, MatButtonModule, MatIconModule, MatListModule, MatProgressBarModule, EmptyState, ErrorBanner, SafetyNotice],
   template: `
-    <h1>Tests</h1>
+    <div class="heading">
+      <h1>Tests</h1>
+      @if (!isCustomer()) {
+        <a mat-flat-button routerLink="/tests/new"><mat-icon>add</mat-icon> Open a test</a>
+      }
+    </div>
     @if (tests.isLoading()) {
       <mat-progress-bar mode="indeterminate" aria-label="Loading tests" />
     }
@@ -51,6 +58,15 @@ import { testStateLabels } from './run-labels';
     :host {
       display: block;
       padding: 16px 24px;
+    }
+    .heading {
+      display: flex;
+      align-items: center;
+      gap: 16px;
+      flex-wrap: wrap;
+    }
+    .heading h1 {
+      flex: 1 1 auto;
     }
     tw-safety-notice {
       display: block;
