@@ -6,9 +6,9 @@ import { demoUser, navLabels } from './support/sign-in';
 
 const expectedNav: Record<Role, string[]> = {
   customer: ['Catalogue', 'Test planner', 'My bookings', 'Tests', 'Documents'],
-  technician: ['Catalogue', 'My tunnel time', 'Tests', 'Import profiles', 'Documents'],
-  analyst: ['Catalogue', 'Test planner', 'Tests', 'Import profiles', 'Documents'],
-  lab_manager: ['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Import profiles', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Balances', 'Booking rules', 'Audit log', 'Dev mailbox'],
+  technician: ['Catalogue', 'My tunnel time', 'Tests', 'Test articles', 'Import profiles', 'Documents'],
+  analyst: ['Catalogue', 'Test planner', 'Tests', 'Test articles', 'Import profiles', 'Documents'],
+  lab_manager: ['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Test articles', 'Import profiles', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Balances', 'Booking rules', 'Audit log', 'Dev mailbox'],
 };
 
 describe('signed-in shell', () => {

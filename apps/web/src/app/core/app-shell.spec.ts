@@ -46,7 +46,7 @@ describe('AppShell', () => {
 
   it('lists the administration sections and the dev mailbox for a lab manager in demo mode', async () => {
     const { labels } = await renderAs('lab_manager', true);
-    expect(labels).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Import profiles', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Balances', 'Booking rules', 'Audit log', 'Dev mailbox']);
+    expect(labels).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Test articles', 'Import profiles', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Balances', 'Booking rules', 'Audit log', 'Dev mailbox']);
   });
 
   it('leaves the dev mailbox out when demo mode is off', async () => {

@@ -8,7 +8,7 @@ describe('navItemsFor', () => {
   });
 
   it('shows a technician the catalogue, their tunnel time, the tests, the import profiles and the documents', () => {
-    expect(labels('technician', true)).toEqual(['Catalogue', 'My tunnel time', 'Tests', 'Import profiles', 'Documents']);
+    expect(labels('technician', true)).toEqual(['Catalogue', 'My tunnel time', 'Tests', 'Test articles', 'Import profiles', 'Documents']);
   });
 
   it('shows a customer the catalogue, the test planner, their bookings, their tests and their documents', () => {
@@ -16,11 +16,11 @@ describe('navItemsFor', () => {
   });
 
   it('shows an analyst the catalogue, the test planner, the tests, the import profiles and the documents', () => {
-    expect(labels('analyst', true)).toEqual(['Catalogue', 'Test planner', 'Tests', 'Import profiles', 'Documents']);
+    expect(labels('analyst', true)).toEqual(['Catalogue', 'Test planner', 'Tests', 'Test articles', 'Import profiles', 'Documents']);
   });
 
   it('shows a lab manager the administration sections, signing rights among them, and, in demo mode, the dev mailbox', () => {
-    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Import profiles', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Balances', 'Booking rules', 'Audit log', 'Dev mailbox']);
+    expect(labels('lab_manager', true)).toEqual(['Catalogue', 'Test planner', 'Bookings', 'Calendar', 'Tests', 'Test articles', 'Import profiles', 'Documents', 'Users', 'Signing rights', 'Tunnels', 'Services', 'Balances', 'Booking rules', 'Audit log', 'Dev mailbox']);
   });
 
   it('gives every role the documents, which lead to the issued result sheets', () => {

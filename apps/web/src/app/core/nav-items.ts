@@ -13,6 +13,8 @@ export interface NavItem {
 const catalogue: NavItem = { label: 'Catalogue', path: '/catalogue', icon: 'view_list' };
 const planner: NavItem = { label: 'Test planner', path: '/planner', icon: 'architecture' };
 const tests: NavItem = { label: 'Tests', path: '/tests', icon: 'science' };
+/** Staff keep the articles customers send; customers see theirs on their tests. */
+const articles: NavItem = { label: 'Test articles', path: '/articles', icon: 'inventory_2' };
 const importProfiles: NavItem = { label: 'Import profiles', path: '/import-profiles', icon: 'transform' };
 const myBookings: NavItem = { label: 'My bookings', path: '/bookings', icon: 'event_available' };
 const myWeek: NavItem = { label: 'My tunnel time', path: '/my-week', icon: 'today' };
@@ -21,14 +23,15 @@ const documents: NavItem = { label: 'Documents', path: '/documents', icon: 'desc
 /** Which sections each role may open, in the order they are listed. */
 export const navItemsByRole: Readonly<Record<Role, readonly NavItem[]>> = {
   customer: [catalogue, planner, myBookings, tests, documents],
-  technician: [catalogue, myWeek, tests, importProfiles, documents],
-  analyst: [catalogue, planner, tests, importProfiles, documents],
+  technician: [catalogue, myWeek, tests, articles, importProfiles, documents],
+  analyst: [catalogue, planner, tests, articles, importProfiles, documents],
   lab_manager: [
     catalogue,
     planner,
     { label: 'Bookings', path: '/lab-bookings', icon: 'event_note' },
     { label: 'Calendar', path: '/lab-calendar', icon: 'calendar_view_week' },
     tests,
+    articles,
     importProfiles,
     documents,
     { label: 'Users', path: '/admin/users', icon: 'group' },
