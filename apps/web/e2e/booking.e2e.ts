@@ -82,6 +82,28 @@ describe('booking tunnel time', () => {
     await mail.waitFor();
     await mail.click();
     await mail.getByText(/booking\.ics \(text\/calendar/).waitFor();
+
+    // The lab manager moves the confirmed booking a day later; the customer is mailed the replacing calendar entry.
+    const later = DateTime.now().plus({ days: 91 }).toFormat('yyyy-LL-dd');
+    const movePage = await suite.signedIn(manager.email);
+    await openSection(movePage, 'Bookings', 'Bookings');
+    const moveCard = movePage.locator('tw-booking-summary').filter({ hasText: article });
+    await moveCard.getByRole('button', { name: 'Move…' }).click();
+    const move = movePage.getByRole('dialog');
+    await move.getByRole('heading', { name: 'Move the booking' }).waitFor();
+    await move.getByLabel('End', { exact: true }).fill(`${day}T08:00`);
+    await move.getByRole('button', { name: 'Move booking' }).click();
+    await move.getByText('The end must be after the start.').waitFor();
+    await move.getByLabel('Start', { exact: true }).fill(`${later}T09:00`);
+    await move.getByLabel('End', { exact: true }).fill(`${later}T17:00`);
+    await move.getByLabel('Note to the customer').fill('The balance is needed elsewhere on the first day.');
+    await move.getByRole('button', { name: 'Move booking' }).click();
+    await movePage.getByText('Booking moved; the customer was sent the updated calendar entry.').waitFor();
+    await movePage.goto(`${suite.api.baseUrl}/dev-mailbox`);
+    const moved = movePage.locator('mat-expansion-panel').filter({ hasText: 'Booking moved' }).filter({ hasText: customer.email }).first();
+    await moved.waitFor();
+    await moved.click();
+    await moved.getByText(/booking\.ics \(text\/calendar/).waitFor();
   });
 
   it('a customer attaches a saved plan, whose tunnel hours set the end, and a PNG drawing; the lab manager sees and downloads the drawing', async () => {

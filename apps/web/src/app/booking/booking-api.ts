@@ -44,6 +44,11 @@ export class BookingApi {
     return this.http.post<Booking>(`/api/bookings/${id}/counter-proposal`, { ...period, note });
   }
 
+  /** Moves a confirmed booking (lab manager); the customer gets an updated calendar entry. */
+  reschedule(id: string, period: PeriodInput, note: string): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/reschedule`, { ...period, note });
+  }
+
   acceptCounterProposal(id: string): Observable<Booking> {
     return this.http.post<Booking>(`/api/bookings/${id}/accept-counter-proposal`, {});
   }

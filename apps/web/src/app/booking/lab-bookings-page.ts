@@ -20,7 +20,7 @@ import { openReasonDialog } from '../shared/reason-dialog';
 import { BookingApi } from './booking-api';
 import { BookingSummary } from './booking-summary';
 import { CancelBookingDialog } from './cancel-booking-dialog';
-import { CounterProposalDialog } from './counter-proposal-dialog';
+import { PeriodChangeDialog, type PeriodChangeDialogData } from './period-change-dialog';
 import { QuoteEditor } from './quote-editor';
 
 const sections: readonly { title: string; states: readonly BookingState[] }[] = [
@@ -103,7 +103,14 @@ export class LabBookingsPage {
   }
 
   protected counterPropose(booking: Booking): void {
-    this.openThenReload(this.dialog.open(CounterProposalDialog, { data: booking, width: '560px' }).afterClosed(), 'Other period offered.');
+    const data: PeriodChangeDialogData = { booking, change: 'counter-proposal' };
+    this.openThenReload(this.dialog.open(PeriodChangeDialog, { data, width: '560px' }).afterClosed(), 'Other period offered.');
+  }
+
+  /** Moves a confirmed booking to another free period; the customer is sent the updated calendar entry. */
+  protected reschedule(booking: Booking): void {
+    const data: PeriodChangeDialogData = { booking, change: 'reschedule' };
+    this.openThenReload(this.dialog.open(PeriodChangeDialog, { data, width: '560px' }).afterClosed(), 'Booking moved; the customer was sent the updated calendar entry.');
   }
 
   protected cancel(booking: Booking): void {

@@ -4,23 +4,52 @@ import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import type { Booking } from '@tunnelwright/contracts';
+import type { Booking, PeriodInput } from '@tunnelwright/contracts';
+import type { Observable } from 'rxjs';
 import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
 import { BookingApi } from './booking-api';
 import { formatPeriod, localValueOf } from './lab-time';
 import { PeriodFields, periodControls, readPeriod } from './period-fields';
 
-/** A lab manager offers another period instead of the one asked for; times are the lab's wall time. */
+/** What the new period does: offered instead of the one asked for, or the confirmed booking moved to it. */
+export type PeriodChange = 'counter-proposal' | 'reschedule';
+
+export interface PeriodChangeDialogData {
+  booking: Booking;
+  change: PeriodChange;
+}
+
+const wording: Readonly<Record<PeriodChange, { title: string; current: string; action: string; failure: string; effect: string }>> = {
+  'counter-proposal': {
+    title: 'Offer another period',
+    current: 'Asked for',
+    action: 'Offer this period',
+    failure: 'The other period could not be offered.',
+    effect: 'The customer accepts or declines it; the slot they asked for is freed.',
+  },
+  reschedule: {
+    title: 'Move the booking',
+    current: 'Booked for',
+    action: 'Move booking',
+    failure: 'The booking could not be moved.',
+    effect: 'The customer is e-mailed an updated calendar entry that replaces the old one.',
+  },
+};
+
+/**
+ * A lab manager gives a booking another period: offered instead of the one a request asked for, or a confirmed
+ * booking moved. Times are the lab's wall time; the new period must be free, which the server checks.
+ */
 @Component({
-  selector: 'tw-counter-proposal-dialog',
+  selector: 'tw-period-change-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule, ErrorBanner, PeriodFields],
   template: `
-    <h2 mat-dialog-title>Offer another period</h2>
+    <h2 mat-dialog-title>{{ words.title }}</h2>
     <mat-dialog-content>
-      <p>Asked for: {{ asked }}</p>
-      <p>Times below are in the lab's zone, {{ booking.timeZone }}.</p>
+      <p>{{ words.current }}: {{ current }}</p>
+      <p>Times below are in the lab's zone, {{ booking.timeZone }}. {{ words.effect }}</p>
       <form [formGroup]="form" class="fields">
         <tw-period-fields [controls]="form.controls" />
         <mat-form-field class="wide">
@@ -37,17 +66,19 @@ import { PeriodFields, periodControls, readPeriod } from './period-fields';
     </mat-dialog-content>
     <mat-dialog-actions align="end">
       <button mat-button type="button" mat-dialog-close>Close</button>
-      <button mat-flat-button type="button" [disabled]="sending()" (click)="send()">Offer this period</button>
+      <button mat-flat-button type="button" [disabled]="sending()" (click)="send()">{{ words.action }}</button>
     </mat-dialog-actions>
   `,
   styleUrl: './period-dialog.scss',
 })
-export class CounterProposalDialog {
+export class PeriodChangeDialog {
   private readonly api = inject(BookingApi);
-  private readonly dialogRef = inject<MatDialogRef<CounterProposalDialog, Booking>>(MatDialogRef);
-  protected readonly booking = inject<Booking>(MAT_DIALOG_DATA);
+  private readonly dialogRef = inject<MatDialogRef<PeriodChangeDialog, Booking>>(MatDialogRef);
+  private readonly data = inject<PeriodChangeDialogData>(MAT_DIALOG_DATA);
+  protected readonly booking = this.data.booking;
+  protected readonly words = wording[this.data.change];
 
-  protected readonly asked = formatPeriod(this.booking.period, this.booking.timeZone);
+  protected readonly current = formatPeriod(this.booking.period, this.booking.timeZone);
   protected readonly form = new FormGroup({
     ...periodControls(localValueOf(this.booking.period.start, this.booking.timeZone), localValueOf(this.booking.period.end, this.booking.timeZone)),
     note: new FormControl('', { nonNullable: true, validators: Validators.maxLength(2000) }),
@@ -64,12 +95,17 @@ export class CounterProposalDialog {
       return;
     }
     this.sending.set(true);
-    this.api.counterPropose(this.booking.id, period, this.form.controls.note.value.trim()).subscribe({
+    this.sendError.set(null);
+    this.call(period, this.form.controls.note.value.trim()).subscribe({
       next: (booking) => this.dialogRef.close(booking),
       error: (error: unknown) => {
         this.sending.set(false);
-        this.sendError.set(problemMessage(error, 'The other period could not be offered.'));
+        this.sendError.set(problemMessage(error, this.words.failure));
       },
     });
+  }
+
+  private call(period: PeriodInput, note: string): Observable<Booking> {
+    return this.data.change === 'reschedule' ? this.api.reschedule(this.booking.id, period, note) : this.api.counterPropose(this.booking.id, period, note);
   }
 }
