@@ -60,7 +60,7 @@ import { TestSetupApi } from './test-setup-api';
           </ng-container>
           <ng-container matColumnDef="kind">
             <th mat-header-cell *matHeaderCellDef>Kind</th>
-            <td mat-cell *matCellDef="let article">{{ kindLabels[article.kind] }}</td>
+            <td mat-cell *matCellDef="let article">{{ kindLabel(article) }}</td>
           </ng-container>
           <ng-container matColumnDef="area">
             <th mat-header-cell *matHeaderCellDef>Reference area (m²)</th>
@@ -130,6 +130,10 @@ export class ArticlesPage {
   protected readonly articles = rxResource({ params: () => this.organisationId(), stream: ({ params }) => this.api.articles(params || undefined) });
   private readonly customerNames = computed(() => new Map((this.customers.value() ?? []).map((customer) => [customer.id, customer.name])));
   protected readonly message = (error: unknown, what: string) => problemMessage(error, `The ${what} could not be loaded.`);
+
+  protected kindLabel(article: Article): string {
+    return this.kindLabels[article.kind];
+  }
 
   protected organisationName(article: Article): string {
     return this.customerNames().get(article.organisationId) ?? '—';
