@@ -1,11 +1,14 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { ChangeDetectionStrategy, Component, signal } from '@angular/core';
+import { FormGroup } from '@angular/forms';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatDialogRef } from '@angular/material/dialog';
 import { MatProgressBarHarness } from '@angular/material/progress-bar/testing';
 import { ErrorBanner } from '../../shared/error-banner';
+import { Subject, throwError } from 'rxjs';
 import { FormDialogLayout } from './form-dialog-layout';
+import { FormSubmission } from './form-submission';
 
 /** A dialog as the catalogue and invitation dialogs are: a projected form, and a banner of its own. */
 @Component({
@@ -17,10 +20,9 @@ import { FormDialogLayout } from './form-dialog-layout';
       title="New balance"
       formId="balance-form"
       submitLabel="Create balance"
-      [sending]="sending()"
+      [submission]="submission"
       [loading]="loading()"
       [progressLabel]="progressLabel()"
-      [error]="error()"
     >
       @if (notice(); as message) {
         <tw-error-banner [message]="message" />
@@ -30,10 +32,9 @@ import { FormDialogLayout } from './form-dialog-layout';
   `,
 })
 class FormDialogLayoutHost {
-  readonly sending = signal(false);
+  readonly submission = new FormSubmission(new FormGroup({}), { failure: 'The balance could not be saved.' });
   readonly loading = signal(false);
   readonly progressLabel = signal('Saving');
-  readonly error = signal<string | null>(null);
   readonly notice = signal<string | null>(null);
   submitted = 0;
 }
@@ -70,7 +71,7 @@ describe('FormDialogLayout', () => {
   });
 
   it('turns the submit button off and says it is saving while the form is sent', async () => {
-    await set((host) => host.sending.set(true));
+    await set((host) => host.submission.send(new Subject<never>()));
     expect(await (await submit()).isDisabled()).toBe(true);
     expect(element().querySelector('mat-progress-bar')?.getAttribute('aria-label')).toBe('Saving');
   });
@@ -87,7 +88,7 @@ describe('FormDialogLayout', () => {
   it('shows why sending failed without a retry, below a banner the dialog projects', async () => {
     await set((host) => {
       host.notice.set('The organisations could not be loaded.');
-      host.error.set('The balance could not be saved.');
+      host.submission.send(throwError(() => new Error('socket closed')));
     });
     const banners = [...element().querySelectorAll('mat-dialog-content [role="alert"]')].map((banner) => banner.textContent);
     expect(banners).toHaveLength(2);
