@@ -1,21 +1,13 @@
-import {
-  AfterContentInit,
-  ChangeDetectionStrategy,
-  Component,
-  computed,
-  contentChildren,
-  input,
-  output,
-  viewChild,
-} from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
-import { MatColumnDef, MatTable, MatTableModule } from '@angular/material/table';
+import { MatTableModule } from '@angular/material/table';
 import { EmptyState } from '../../shared/empty-state';
 import { ErrorBanner } from '../../shared/error-banner';
 import type { ArchivableList, ArchivableRecord } from './archivable-list';
+import { ProjectedColumnsTable } from './projected-columns-table';
 import { RowActions } from './row-actions';
 
 /**
@@ -73,7 +65,7 @@ import { RowActions } from './row-actions';
   `,
   styleUrl: './catalogue-list.scss',
 })
-export class CatalogueList<T extends ArchivableRecord> implements AfterContentInit {
+export class CatalogueList<T extends ArchivableRecord> extends ProjectedColumnsTable {
   /** The records and their actions. */
   readonly list = input.required<ArchivableList<T>>();
   /** The page heading, also the table's name, e.g. "Tunnels". */
@@ -89,13 +81,4 @@ export class CatalogueList<T extends ArchivableRecord> implements AfterContentIn
   readonly edit = output<T | null>();
 
   protected readonly allColumns = computed(() => ['name', ...this.columns(), 'actions']);
-  private readonly table = viewChild.required(MatTable);
-  private readonly columnDefs = contentChildren(MatColumnDef);
-
-  ngAfterContentInit(): void {
-    // The page's own columns are declared in its template, outside this table, so the table is told of them here.
-    for (const columnDef of this.columnDefs()) {
-      this.table().addColumnDef(columnDef);
-    }
-  }
 }

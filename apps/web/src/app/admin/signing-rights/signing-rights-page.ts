@@ -14,17 +14,15 @@ import { EmptyState } from '../../shared/empty-state';
 import { ErrorBanner } from '../../shared/error-banner';
 import { openReasonDialog } from '../../shared/reason-dialog';
 import { GrantSigningRightDialog } from './grant-signing-right-dialog';
+import { SigningRightsTable } from './signing-rights-table';
 
 /** Lab managers' list of who may approve results and sign sheets, the rights removed before, and grant and removal. */
 @Component({
   selector: 'tw-signing-rights-page',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, MatTableModule, EmptyState, ErrorBanner],
+  imports: [DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, MatTableModule, EmptyState, ErrorBanner, SigningRightsTable],
   templateUrl: './signing-rights-page.html',
   styles: `
-    table {
-      width: 100%;
-    }
     h2 {
       margin-top: 24px;
     }
