@@ -118,7 +118,10 @@ describe('CatalogueList', () => {
     expect(await dialog.getTitleText()).toBe('Archive Six-component balance?');
     expect(await dialog.getText()).toContain('It can no longer be fitted. You can restore it later.');
     expect(host.archiveCalls).toEqual([]);
-    await (await dialog.getHarness(MatButtonHarness.with({ text: 'Archive' }))).click();
+    const archive = await dialog.getHarness(MatButtonHarness.with({ text: 'Archive' }));
+    // Archiving takes the record out of the catalogue, so the button is drawn as a destructive act.
+    expect(await (await archive.host()).hasClass('tw-destructive')).toBe(true);
+    await archive.click();
     for (let tick = 0; tick < 100 && host.archiveCalls.length === 0; tick++) {
       await new Promise((resolve) => setTimeout(resolve, 10));
     }
