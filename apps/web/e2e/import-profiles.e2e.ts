@@ -122,4 +122,39 @@ describe('import profiles', () => {
     await points.waitFor();
     await expect.poll(() => points.locator('tbody tr').count()).toBe(7);
   }, 180_000);
+
+  it('an analyst edits the profile, tried on the sample again, then archives it after confirming, and uploads no longer offer it', async () => {
+    const page = await suite.signedIn(demoUser('analyst').email);
+    await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Import profiles' }).click();
+    await page.getByRole('link', { name: `Edit ${profileName}` }).click();
+    await expect.poll(() => page.getByLabel('Name', { exact: true }).inputValue()).toBe(profileName);
+    expect(await page.getByLabel('Their column 3', { exact: true }).inputValue()).toBe('qinf');
+    expect(await page.getByRole('checkbox', { name: /decimal comma/ }).isChecked()).toBe(true);
+
+    await page.getByLabel('Description').fill('Files of the invented bench logger, firmware 2 and later');
+    expect(await page.getByRole('button', { name: 'Save changes' }).isDisabled()).toBe(true);
+    await page.getByLabel('Choose a sample file').setInputFiles(sample);
+    await page.getByText(/samples in 7 points/).waitFor();
+    await page.getByRole('button', { name: 'Save changes' }).click();
+    const list = page.getByRole('table', { name: 'Import profiles' });
+    await expect.poll(() => list.locator('tr', { hasText: profileName }).innerText()).toContain('firmware 2 and later');
+
+    await page.getByRole('button', { name: `Archive ${profileName}` }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByText('Reductions that used it keep the copy they were read with.').waitFor();
+    await page.screenshot({ path: `${shots}/import-profile-archive.png` });
+    await dialog.getByRole('button', { name: 'Archive' }).click();
+    await page.getByRole('heading', { name: 'No import profiles yet' }).waitFor();
+    await page.getByRole('switch', { name: 'Show archived' }).click();
+    await expect.poll(() => list.locator('tr', { hasText: profileName }).innerText()).toContain('Archived');
+
+
+    // Analysts do not upload; the technician's upload page no longer offers the archived profile.
+    const technician = await suite.signedIn(demoUser('technician').email);
+    await technician.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Tests' }).click();
+    await technician.getByRole('link', { name: testTitle }).click();
+    await technician.getByRole('link', { name: 'Upload run files' }).click();
+    await technician.getByRole('combobox', { name: /Read with/ }).click();
+    await expect.poll(() => technician.getByRole('option').allInnerTexts()).toEqual(["Tunnelwright's own format"]);
+  }, 120_000);
 });
