@@ -118,6 +118,8 @@ describe('booking tunnel time', () => {
     await openSection(customerPage, 'My bookings', 'My bookings');
     await customerPage.getByRole('link', { name: 'Request tunnel time' }).first().click();
     await customerPage.getByRole('heading', { name: 'Request tunnel time' }).waitFor();
+    // The tunnel list opens with its options only once they have loaded.
+    await customerPage.getByRole('progressbar', { name: 'Loading tunnels' }).waitFor({ state: 'detached' });
     await customerPage.getByRole('combobox', { name: 'Tunnel' }).click();
     await customerPage.getByRole('option', { name: 'Tunnel 1 — closed section' }).click();
     await customerPage.getByRole('combobox', { name: 'Saved test plan' }).click();
