@@ -33,7 +33,9 @@ import { CalibrationStateChip } from './calibration-state-chip';
       font-variant-numeric: tabular-nums;
       white-space: nowrap;
     }
-    .actions {
+    .actions,
+    .mat-column-calibratedOn,
+    .mat-column-dueOn {
       white-space: nowrap;
     }
   `,
