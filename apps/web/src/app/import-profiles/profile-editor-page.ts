@@ -82,9 +82,11 @@ export class ProfileEditorPage {
     params: () => this.id(),
     stream: ({ params: id }) => (id ? this.api.list(true).pipe(map((profiles) => profiles.find((p) => p.id === id) ?? null)) : of(null)),
   });
-  protected readonly archived = computed(() => this.saved.value()?.archived === true);
+  /** The saved profile once loaded; null for a new one, while loading, or after a failed load. */
+  private readonly savedProfile = computed(() => (this.saved.hasValue() ? this.saved.value() : null));
+  protected readonly archived = computed(() => this.savedProfile()?.archived === true);
   protected readonly problemText = (error: Error) => problemMessage(error.cause ?? error, 'The profile could not be loaded.');
-  protected readonly missing = computed(() => this.id() !== undefined && this.saved.hasValue() && this.saved.value() === null);
+  protected readonly missing = computed(() => this.id() !== undefined && this.saved.status() === 'resolved' && this.savedProfile() === null);
 
   private readonly status = toSignal(this.form.statusChanges.pipe(startWith(this.form.status)), { initialValue: this.form.status });
   private readonly rules = toSignal(this.form.valueChanges.pipe(map(() => rulesOf(this.currentProfile()))), { initialValue: rulesOf(this.currentProfile()) });
@@ -110,7 +112,7 @@ export class ProfileEditorPage {
 
   constructor() {
     effect(() => {
-      const saved = this.saved.value();
+      const saved = this.savedProfile();
       if (saved) resetProfileForm(this.form, formFromProfile(saved.name, saved.description, saved.profile));
     });
   }
