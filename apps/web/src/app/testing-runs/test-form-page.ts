@@ -35,6 +35,12 @@ import { TestSetupApi } from './test-setup-api';
       font: var(--mat-sys-title-medium);
       margin: 24px 0 8px;
     }
+    .test-grid {
+      display: grid;
+      grid-template-columns: repeat(2, minmax(0, 1fr));
+      gap: 8px 16px;
+      align-items: start;
+    }
     .wide {
       grid-column: 1 / -1;
     }
@@ -54,6 +60,7 @@ import { TestSetupApi } from './test-setup-api';
       grid-template-columns: minmax(160px, 1fr) minmax(240px, 2fr) auto;
       gap: 0 16px;
       align-items: flex-start;
+      margin-bottom: 8px;
     }
     .row button {
       margin-top: 8px;
