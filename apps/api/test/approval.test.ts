@@ -243,7 +243,7 @@ describe('approval workflow and certified sheets', () => {
       expect(text).toContain(test.balance!.identifier); // (e) method: the balance
       for (const line of data.method.correctionMethods) expect(text).toContain(line); // (e) corrections
       expect(text).toContain(data.method.engineVersion); // (e) engine version
-      expect(data.dates.issue).toBe(first.issueDate); // (i) issue date, and the receipt and test dates, in the lab's zone
+      expect(data.dates.issue).toBe(stored.issueDate); // (i) issue date, and the receipt and test dates, in the lab's zone
       for (const date of [data.dates.receipt, ...data.dates.testDates, data.dates.issue]) expect(text).toContain(formatDate(date));
       expect(text).toContain(ITEMS_TESTED_STATEMENT); // (k)
       expect(text).toContain(REPRODUCTION_STATEMENT); // (o)
