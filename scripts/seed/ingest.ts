@@ -5,6 +5,7 @@ import { Balance, BalanceCalibration, createRawStore, Organisation, RawFile, rec
 import { buildReductionConfig } from '../../apps/api/src/ingest/build-reduction-config';
 import { queueReduction } from '../../apps/api/src/ingest/queue-reduction';
 import { runReduction } from '../../apps/worker/src/reductions/run-reduction';
+import { demoTunnels } from './catalogue';
 import { demoCustomers } from './demo-users';
 
 const examples = fileURLToPath(new URL('../../libs/aero/examples/', import.meta.url));
@@ -66,8 +67,10 @@ export async function seedIngest(knex: Knex, created: string[]): Promise<void> {
   if (!balance) {
     const open = example('open-jet-bridges');
     const calibration = (open.balance as { capacities: number[]; calibration: { linear: number[][]; interaction?: number[][] } });
+    // Installed under the turntable of the closed-section tunnel; the catalogue shows its capacities there.
+    const turntable = await Tunnel.query(knex).findOne({ name: demoTunnels[0]!.name });
     balance = await knex.transaction(async (trx) => {
-      const b = await Balance.query(trx).insert({ ...demoBalance, capacities: calibration.capacities });
+      const b = await Balance.query(trx).insert({ ...demoBalance, capacities: calibration.capacities, tunnelId: turntable?.id ?? null });
       await BalanceCalibration.query(trx).insert({ balanceId: b.id, version: 1, matrices: { linear: calibration.calibration.linear, interaction: calibration.calibration.interaction }, calibratedOn: '2026-06-15', dueOn: '2027-06-15', enteredBy: manager.id });
       await recordAudit(trx, { actorId: manager.id, action: 'balance.created', entity: 'balance', entityId: b.id, after: { identifier: b.identifier } });
       return b;

@@ -36,6 +36,38 @@ describe('/api/balances and their calibration versions', () => {
     expect(zero.body.errors).toEqual([{ field: 'capacities', message: 'Every capacity must be greater than zero' }]);
   });
 
+  it('a balance installed in a tunnel is listed with its capacities on that tunnel, for customers too; an unknown or archived tunnel is 400', async () => {
+    const customer = await fixtures.user({ role: 'customer' });
+    const tunnel = await request(t.app)
+      .post('/api/tunnels')
+      .set('Authorization', auth(manager))
+      .send({ name: `Balance-check tunnel ${fixtures.unique()}`, kind: 'closed', width: 2, height: 1.5, area: 2.9, length: 4, maxSpeed: 50 });
+    expect(tunnel.status).toBe(201);
+    expect(tunnel.body.balances).toEqual([]);
+    const identifier = `TB-${fixtures.unique()}`;
+    const installed = await request(t.app).post('/api/balances').set('Authorization', auth(manager)).send({ identifier, capacities: [400, 400, 1200, 120, 200, 120], tunnelId: tunnel.body.id });
+    expect(installed.status, JSON.stringify(installed.body)).toBe(201);
+    expect(installed.body.tunnelId).toBe(tunnel.body.id);
+
+    const listed = await request(t.app).get('/api/tunnels').set('Authorization', auth(customer));
+    const shown = listed.body.find((x: { id: string }) => x.id === tunnel.body.id);
+    expect(shown.balances).toEqual([{ identifier, capacities: [400, 400, 1200, 120, 200, 120] }]);
+    expect((await request(t.app).get(`/api/tunnels/${tunnel.body.id}`).set('Authorization', auth(customer))).body.balances).toHaveLength(1);
+
+    const unknown = await request(t.app).put(`/api/balances/${installed.body.id}`).set('Authorization', auth(manager)).send({ identifier, capacities: [400, 400, 1200, 120, 200, 120], tunnelId: '00000000-0000-4000-8000-000000000000' });
+    expect(unknown.status).toBe(400);
+    expect(unknown.body.errors).toEqual([{ field: 'tunnelId', message: 'Choose a tunnel of the catalogue; this one does not exist or is archived' }]);
+    expect((await request(t.app).post(`/api/tunnels/${tunnel.body.id}/archive`).set('Authorization', auth(manager))).status).toBe(200);
+    const archived = await request(t.app).post('/api/balances').set('Authorization', auth(manager)).send({ identifier: `TB-${fixtures.unique()}`, capacities: [400, 400, 1200, 120, 200, 120], tunnelId: tunnel.body.id });
+    expect(archived.status).toBe(400);
+
+    // Taken out of the tunnel, it is no longer listed there.
+    const removed = await request(t.app).put(`/api/balances/${installed.body.id}`).set('Authorization', auth(manager)).send({ identifier, capacities: [400, 400, 1200, 120, 200, 120], tunnelId: null });
+    expect(removed.body.tunnelId).toBeNull();
+    const staffView = await request(t.app).get(`/api/tunnels/${tunnel.body.id}`).set('Authorization', auth(manager));
+    expect(staffView.body.balances).toEqual([]);
+  });
+
   it('versions are kept newest first, each with the name of who entered it; the balance shows the newest', async () => {
     const created = await request(t.app)
       .post('/api/balances')

@@ -43,8 +43,14 @@ export const tunnelInputSchema = z.object({
 });
 export type TunnelInput = z.infer<typeof tunnelInputSchema>;
 
+/** A balance installed in a tunnel, as the catalogue shows it: Fx, Fy, Fz in N and Mx, My, Mz in N·m. */
+export const installedBalanceSchema = z.object({ identifier: z.string(), capacities: z.array(z.number()).length(6) });
+export type InstalledBalance = z.infer<typeof installedBalanceSchema>;
+
 export const tunnelSchema = tunnelInputSchema.extend({
   id: z.uuid(),
+  /** The balances installed in the tunnel, by identifier. */
+  balances: z.array(installedBalanceSchema),
   archived: z.boolean(),
   createdAt: z.iso.datetime(),
   updatedAt: z.iso.datetime(),

@@ -50,6 +50,8 @@ export const balanceInputSchema = z.object({
   identifier: text(80).min(1, { message: 'Enter the identifier' }),
   description: text(2000).default(''),
   capacities: sixNumbers.refine((values) => values.every((v) => v > 0), { message: 'Every capacity must be greater than zero' }),
+  /** Tunnel the balance is installed in; the catalogue shows its capacities there. Null: not installed anywhere. */
+  tunnelId: z.uuid({ message: 'Choose a tunnel from the list' }).nullable().default(null),
 });
 export type BalanceInput = z.infer<typeof balanceInputSchema>;
 

@@ -44,6 +44,7 @@ export function toBalance(b: Balance, current: BalanceCalibration | undefined): 
     identifier: b.identifier,
     description: b.description,
     capacities: b.capacities,
+    tunnelId: b.tunnelId ?? null,
     currentCalibration: current ? toCalibration(current) : null,
     createdAt: b.createdAt.toISOString(),
     updatedAt: b.updatedAt.toISOString(),

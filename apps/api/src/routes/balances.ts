@@ -1,5 +1,6 @@
 import { balanceInputSchema, calibrationInputSchema } from '@tunnelwright/contracts';
-import { Balance, BalanceCalibration, recordAudit, User } from '@tunnelwright/db';
+import { Balance, BalanceCalibration, recordAudit, Tunnel, User } from '@tunnelwright/db';
+import type { Knex } from 'knex';
 import { HttpError } from '../errors/http-error';
 import { currentCalibration } from '../ingest/calibration-check';
 import { toBalance, toCalibration } from '../ingest/ingest-presenters';
@@ -7,6 +8,13 @@ import { sampleBalanceBody, sampleBalanceId, sampleCalibrationBody } from './ing
 import { route, type RouteDef } from './route';
 
 const staff = ['technician', 'analyst', 'lab_manager'] as const;
+
+/** 400 on `tunnelId` unless it names a tunnel of the live catalogue. */
+async function checkTunnel(knex: Knex, tunnelId: string | null): Promise<void> {
+  if (tunnelId === null) return;
+  const tunnel = await Tunnel.query(knex).select('id', 'archivedAt').findById(tunnelId);
+  if (!tunnel || tunnel.archivedAt) throw HttpError.field('tunnelId', 'Choose a tunnel of the catalogue; this one does not exist or is archived');
+}
 
 /** /api/balances: the lab's balances and their calibration versions. Lab managers keep them; staff read. */
 export const balanceRoutes: RouteDef[] = [
@@ -41,6 +49,7 @@ export const balanceRoutes: RouteDef[] = [
     body: balanceInputSchema,
     sample: { body: sampleBalanceBody, expect: 201 },
     handler: async ({ caller, body, res, deps }) => {
+      await checkTunnel(deps.knex, body.tunnelId);
       const created = await deps.knex.transaction(async (trx) => {
         const balance = await Balance.query(trx).insert(body).returning('*');
         await recordAudit(trx, { actorId: caller.id, action: 'balance.created', entity: 'balance', entityId: balance.id, after: toBalance(balance, undefined) });
@@ -57,6 +66,7 @@ export const balanceRoutes: RouteDef[] = [
     body: balanceInputSchema,
     sample: { params: async (f) => ({ id: await sampleBalanceId(f) }), body: sampleBalanceBody, expect: 200 },
     handler: async ({ caller, params, body, res, deps }) => {
+      await checkTunnel(deps.knex, body.tunnelId);
       const updated = await deps.knex.transaction(async (trx) => {
         const balance = await Balance.query(trx).findById(params.id ?? '').forUpdate();
         if (!balance) throw HttpError.notFound('The balance');

@@ -1,4 +1,4 @@
-import type { AuditEntry as AuditEntryDto, Organisation as OrganisationDto, Service as ServiceDto, Tunnel as TunnelDto, UserSummary } from '@tunnelwright/contracts';
+import type { AuditEntry as AuditEntryDto, InstalledBalance, Organisation as OrganisationDto, Service as ServiceDto, Tunnel as TunnelDto, UserSummary } from '@tunnelwright/contracts';
 import type { AuditEntry, Organisation, Service, Tunnel, User } from '@tunnelwright/db';
 
 /** Contract shapes of the models, so no column the client must not see leaves the API by accident. */
@@ -21,7 +21,8 @@ export function toUserSummary(user: User): UserSummary {
   };
 }
 
-export function toTunnel(tunnel: Tunnel): TunnelDto {
+/** A tunnel as the API shows it, with the balances installed in it (none unless given). */
+export function toTunnel(tunnel: Tunnel, balances: readonly InstalledBalance[] = []): TunnelDto {
   return {
     id: tunnel.id,
     name: tunnel.name,
@@ -37,6 +38,7 @@ export function toTunnel(tunnel: Tunnel): TunnelDto {
     shapeFactor: tunnel.shapeFactor,
     openJetConstants: tunnel.openJetConstants,
     capabilities: tunnel.capabilities,
+    balances: [...balances],
     archived: tunnel.archivedAt !== null,
     createdAt: tunnel.createdAt.toISOString(),
     updatedAt: tunnel.updatedAt.toISOString(),

@@ -1,5 +1,6 @@
 import { catalogueListQuerySchema, tunnelInputSchema } from '@tunnelwright/contracts';
-import { isStaff, recordAudit, Tunnel } from '@tunnelwright/db';
+import type { InstalledBalance } from '@tunnelwright/contracts';
+import { Balance, isStaff, recordAudit, Tunnel } from '@tunnelwright/db';
 import { HttpError } from '../errors/http-error';
 import { setArchived } from './archiving';
 import { toTunnel } from './presenters';
@@ -14,7 +15,19 @@ function assertSpeedRange(input: { minSpeed: number; maxSpeed: number }): void {
   if (input.minSpeed > input.maxSpeed) throw HttpError.field('minSpeed', 'Minimum speed cannot exceed the maximum speed');
 }
 
-const tunnelRecord = { entity: 'tunnel', label: 'The tunnel', present: toTunnel };
+const tunnelRecord = { entity: 'tunnel', label: 'The tunnel', present: (tunnel: Tunnel) => toTunnel(tunnel) };
+
+/** The balances installed in each of `tunnelIds`, by identifier. */
+async function installedBalances(tunnelIds: readonly string[]): Promise<Map<string, InstalledBalance[]>> {
+  const byTunnel = new Map<string, InstalledBalance[]>();
+  if (tunnelIds.length === 0) return byTunnel;
+  for (const b of await Balance.query().select('tunnelId', 'identifier', 'capacities').whereIn('tunnelId', tunnelIds).orderBy('identifier')) {
+    const list = byTunnel.get(b.tunnelId!) ?? [];
+    list.push({ identifier: b.identifier, capacities: b.capacities });
+    byTunnel.set(b.tunnelId!, list);
+  }
+  return byTunnel;
+}
 
 /** /api/tunnels: the lab's tunnels. Everybody signed in reads them; lab managers keep them. */
 export const tunnelRoutes: RouteDef[] = [
@@ -28,7 +41,9 @@ export const tunnelRoutes: RouteDef[] = [
     handler: async ({ caller, query, res }) => {
       const builder = Tunnel.query().orderBy('name');
       if (!(query.includeArchived && isStaff(caller))) builder.whereNull('archivedAt');
-      res.json((await builder).map(toTunnel));
+      const tunnels = await builder;
+      const balances = await installedBalances(tunnels.map((t) => t.id));
+      res.json(tunnels.map((t) => toTunnel(t, balances.get(t.id))));
     },
   }),
   route({
@@ -41,7 +56,7 @@ export const tunnelRoutes: RouteDef[] = [
       const tunnel = await Tunnel.query().findById(params.id ?? '');
       // Customers only ever see the live catalogue.
       if (!tunnel || (tunnel.archivedAt && !isStaff(caller))) throw HttpError.notFound('The tunnel');
-      res.json(toTunnel(tunnel));
+      res.json(toTunnel(tunnel, (await installedBalances([tunnel.id])).get(tunnel.id)));
     },
   }),
   route({

@@ -9,6 +9,8 @@ export class Balance extends BaseModel {
   identifier!: string;
   description!: string;
   capacities!: number[];
+  /** Tunnel the balance is installed in, if any. */
+  tunnelId!: string | null;
 
   calibrations?: BalanceCalibration[];
 

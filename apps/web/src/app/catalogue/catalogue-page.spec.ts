@@ -21,6 +21,7 @@ const tunnel: Tunnel = {
   shapeFactor: 0.86,
   openJetConstants: {},
   capabilities: { yawRange: 30 },
+  balances: [{ identifier: 'SB-3', capacities: [400, 400, 1200, 120, 200, 120] }],
   archived: false,
   createdAt: '2026-01-01T00:00:00.000Z',
   updatedAt: '2026-01-01T00:00:00.000Z',
@@ -51,6 +52,11 @@ describe('CataloguePage', () => {
   }
 
   afterEach(() => TestBed.inject(HttpTestingController).verify());
+
+  it('shows the capacities of the balance installed in each tunnel, forces in N and moments in N·m', async () => {
+    const { fixture } = await open();
+    expect((fixture.nativeElement as HTMLElement).querySelector('.facts')?.textContent).toContain('SB-3: Fx 400, Fy 400, Fz 1,200 N; Mx 120, My 200, Mz 120 N·m');
+  });
 
   it('opens a tunnel’s week of free and busy time on request, showing others’ bookings only as busy', async () => {
     const { fixture, backend, loader } = await open();

@@ -6,7 +6,7 @@ import { MatCardModule } from '@angular/material/card';
 import { MatChipsModule } from '@angular/material/chips';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import type { Service, Tunnel } from '@tunnelwright/contracts';
+import type { InstalledBalance, Service, Tunnel } from '@tunnelwright/contracts';
 import { BookingApi } from '../booking/booking-api';
 import { TunnelOccupancyWeek } from '../booking/tunnel-occupancy-week';
 import { CatalogueApi } from '../core/catalogue-api';
@@ -66,6 +66,12 @@ export class CataloguePage {
       if (!next.delete(tunnelId)) next.add(tunnelId);
       return next;
     });
+  }
+
+  /** A balance's capacities, forces in N then moments in N·m: "Fx 400, Fy 400, Fz 1,200 N; Mx 120, My 200, Mz 120 N·m". */
+  protected capacitiesText(balance: InstalledBalance): string {
+    const [fx, fy, fz, mx, my, mz] = balance.capacities.map((c) => c.toLocaleString('en-GB'));
+    return `Fx ${fx}, Fy ${fy}, Fz ${fz} N; Mx ${mx}, My ${my}, Mz ${mz} N·m`;
   }
 
   protected rate(service: Service): string {

@@ -7,6 +7,7 @@ import { MatButtonHarness } from '@angular/material/button/testing';
 import { MAT_DIALOG_DATA, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
+import { MatSelectHarness } from '@angular/material/select/testing';
 import type { Balance } from '@tunnelwright/contracts';
 import { BalanceDialog } from './balance-dialog';
 
@@ -15,6 +16,7 @@ const existing: Balance = {
   identifier: 'UFB-07',
   description: 'Under-floor six-component balance',
   capacities: [400, 400, 1200, 120, 200, 120],
+  tunnelId: '1a2b3c4d-5e6f-4a7b-8c9d-0e1f2a3b4c5d',
   currentCalibration: null,
   createdAt: '2026-02-01T09:00:00.000Z',
   updatedAt: '2026-02-01T09:00:00.000Z',
@@ -27,8 +29,15 @@ function setUp(data: Balance | null) {
     providers: [provideHttpClient(), provideHttpClientTesting(), { provide: MAT_DIALOG_DATA, useValue: data }, { provide: MatDialogRef, useValue: { close } }],
   });
   const fixture = TestBed.createComponent(BalanceDialog);
+  fixture.detectChanges();
+  const backend = TestBed.inject(HttpTestingController);
+  // The "Installed in" choices: the live catalogue's tunnels.
+  backend.expectOne('/api/tunnels').flush([
+    { id: existing.tunnelId, name: 'Tunnel 1 — closed section' },
+    { id: '2b3c4d5e-6f7a-4b8c-9d0e-1f2a3b4c5d6e', name: 'Tunnel 2 — open jet' },
+  ]);
   const loader: HarnessLoader = TestbedHarnessEnvironment.loader(fixture);
-  return { fixture, loader, close, backend: TestBed.inject(HttpTestingController) };
+  return { fixture, loader, close, backend };
 }
 
 describe('BalanceDialog', () => {
@@ -61,9 +70,23 @@ describe('BalanceDialog', () => {
     await (await loader.getHarness(MatButtonHarness.with({ text: 'Create balance' }))).click();
     const request = backend.expectOne('/api/balances');
     expect(request.request.method).toBe('POST');
-    expect(request.request.body).toEqual({ identifier: 'SB-12', description: '', capacities: [250, 250, 900, 60, 110, 60] });
+    expect(request.request.body).toEqual({ identifier: 'SB-12', description: '', capacities: [250, 250, 900, 60, 110, 60], tunnelId: null });
     request.flush({ ...existing, identifier: 'SB-12' });
     expect(close).toHaveBeenCalledWith(expect.objectContaining({ identifier: 'SB-12' }));
+  });
+
+  it('installs the balance in the tunnel chosen, or in none', async () => {
+    const { loader, fixture, backend } = setUp(existing);
+    await fixture.whenStable();
+    const select = await (await loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: 'Installed in' }))).getControl(MatSelectHarness);
+    expect(await select?.getValueText()).toBe('Tunnel 1 — closed section');
+    await select?.open();
+    expect(await Promise.all((await select!.getOptions()).map((o) => o.getText()))).toEqual(['No tunnel', 'Tunnel 1 — closed section', 'Tunnel 2 — open jet']);
+    await select?.clickOptions({ text: 'Tunnel 2 — open jet' });
+    await (await loader.getHarness(MatButtonHarness.with({ text: 'Save changes' }))).click();
+    const request = backend.expectOne(`/api/balances/${existing.id}`);
+    expect(request.request.body.tunnelId).toBe('2b3c4d5e-6f7a-4b8c-9d0e-1f2a3b4c5d6e');
+    request.flush({ ...existing, tunnelId: '2b3c4d5e-6f7a-4b8c-9d0e-1f2a3b4c5d6e' });
   });
 
   it('edits with PUT and shows the API field errors where they belong', async () => {
@@ -74,6 +97,8 @@ describe('BalanceDialog', () => {
     await (await loader.getHarness(MatButtonHarness.with({ text: 'Save changes' }))).click();
     const request = backend.expectOne(`/api/balances/${existing.id}`);
     expect(request.request.method).toBe('PUT');
+    // The tunnel it is installed in is kept unless changed.
+    expect(request.request.body.tunnelId).toBe(existing.tunnelId);
     request.flush(
       { type: 'about:blank', title: 'Invalid request', status: 400, detail: 'Check the highlighted fields.', errors: [{ field: 'identifier', message: 'Another balance has this identifier' }, { field: 'capacities', message: 'Every capacity must be greater than zero' }] },
       { status: 400, statusText: 'Bad Request' },

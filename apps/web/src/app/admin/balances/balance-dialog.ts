@@ -1,11 +1,14 @@
-import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, signal } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
 import { AbstractControl, FormArray, FormControl, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSelectModule } from '@angular/material/select';
 import type { Balance, BalanceInput } from '@tunnelwright/contracts';
+import { CatalogueApi } from '../../core/catalogue-api';
 import { problemFieldErrors, problemMessage } from '../../core/problem-message';
 import { ErrorBanner } from '../../shared/error-banner';
 import { focusFirstInvalid } from '../../shared/focus-first-invalid';
@@ -34,7 +37,7 @@ export function capacityError(control: AbstractControl, index: number): string {
 @Component({
   selector: 'tw-balance-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatButtonModule, MatProgressBarModule, ErrorBanner],
+  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule, MatProgressBarModule, ErrorBanner],
   templateUrl: './balance-dialog.html',
   styles: `
     .tw-form-grid {
@@ -64,10 +67,15 @@ export class BalanceDialog {
   protected readonly form = inject(NonNullableFormBuilder).group({
     identifier: [this.balance?.identifier ?? '', [Validators.required, Validators.maxLength(80)]],
     description: [this.balance?.description ?? '', Validators.maxLength(2000)],
+    tunnelId: new FormControl<string | null>(this.balance?.tunnelId ?? null),
     capacities: new FormArray(
       loadComponents.map((_, index) => new FormControl<number | null>(this.balance?.capacities[index] ?? null, { validators: [Validators.required, positiveNumber] })),
     ),
   });
+  private readonly catalogue = inject(CatalogueApi);
+  /** The tunnels of the live catalogue, which a balance can be installed in. */
+  private readonly tunnelList = rxResource({ stream: () => this.catalogue.tunnels() });
+  protected readonly tunnels = computed(() => (this.tunnelList.hasValue() ? this.tunnelList.value() : []));
   protected readonly capacityLabels = capacityLabels;
   protected readonly capacityError = capacityError;
   protected readonly busy = signal(false);
@@ -83,7 +91,7 @@ export class BalanceDialog {
       return;
     }
     const value = this.form.getRawValue();
-    const input: BalanceInput = { identifier: value.identifier.trim(), description: value.description.trim(), capacities: value.capacities.map((c) => c ?? 0) };
+    const input: BalanceInput = { identifier: value.identifier.trim(), description: value.description.trim(), capacities: value.capacities.map((c) => c ?? 0), tunnelId: value.tunnelId };
     this.busy.set(true);
     this.error.set(null);
     const request = this.balance ? this.api.updateBalance(this.balance.id, input) : this.api.createBalance(input);

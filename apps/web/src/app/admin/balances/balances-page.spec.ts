@@ -20,6 +20,7 @@ function balance(index: number, dueInDays: number | null): Balance {
     identifier: `UFB-0${index}`,
     description: index === 1 ? 'Under-floor balance, road-vehicle turntable' : '',
     capacities: [400, 400, 1200, 120, 200, 120],
+  tunnelId: null,
     currentCalibration:
       dueInDays === null
         ? null

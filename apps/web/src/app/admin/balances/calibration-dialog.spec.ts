@@ -19,6 +19,7 @@ const balance: Balance = {
   identifier: 'UFB-07',
   description: '',
   capacities: [400, 400, 1200, 120, 200, 120],
+  tunnelId: null,
   currentCalibration: {
     id: '7a6b5c4d-3e2f-4a1b-9c8d-7e6f5a4b3c2d',
     balanceId: '6f1e2d3c-4b5a-4968-8776-655443322110',
