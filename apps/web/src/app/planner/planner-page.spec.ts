@@ -14,7 +14,7 @@ import { sphereFixture } from './testing/shape-fixtures';
 
 const caution = 'Planning estimate only, not a design value: design loads are for a licensed engineer to determine under the local code.';
 const sphere = sphereFixture('Invented handbook of drag, table 2');
-const tunnel = { id: '5a0c1d2e-3f40-4a5b-8c6d-7e8f90a1b2c3', name: 'Demo tunnel', area: 2.9, maxSpeed: 55 } as Tunnel;
+const tunnel = { id: '5a0c1d2e-3f40-4a5b-8c6d-7e8f90a1b2c3', name: 'Demo tunnel', area: 2.9, maxSpeed: 55, balances: [{ identifier: 'UFB-2', capacities: [450, 450, 1500, 150, 250, 150] }] } as Tunnel;
 const evaluation: PlanEvaluation = {
   caution,
   buildUp: {
@@ -173,6 +173,24 @@ describe('PlannerPage balance picker', { timeout: 20_000 }, () => {
     expect(call.request.body).not.toHaveProperty('dragCapacity');
     call.flush(evaluation);
     backend.verify();
+  });
+
+  it('offers a customer the drag capacity of the balance the catalogue lists in the chosen tunnel', async () => {
+    const { fixture, backend, loader } = start('customer');
+    await fixture.whenStable();
+    await (await loader.getHarness(MatSelectHarness.with({ selector: '.parts mat-select' }))).clickOptions({ text: 'Sphere' });
+    await (await (await loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: 'Diameter (m)' }))).getControl(MatInputHarness))?.setValue('0.2');
+    expect(await loader.getHarnessOrNull(MatButtonHarness.with({ text: /^Use UFB-2/ }))).toBeNull();
+    await (await loader.getHarness(MatSelectHarness.with({ selector: '[formcontrolname="tunnelId"]' }))).clickOptions({ text: /Demo tunnel/ });
+    await (await loader.getHarness(MatButtonHarness.with({ text: 'Use UFB-2, fitted in this tunnel: Fx 450 N' }))).click();
+    const typed = await (await loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: 'Balance drag capacity (N)' }))).getControl(MatInputHarness);
+    expect(await typed?.getValue()).toBe('450');
+    await new Promise((done) => setTimeout(done, 450));
+    await fixture.whenStable();
+    const call = backend.expectOne('/api/plans/evaluate');
+    expect(call.request.body.dragCapacity).toBe(450);
+    call.flush(evaluation);
+    backend.expectNone('/api/balances');
   });
 
   it('asks customers for a typed capacity and never lists the lab’s balances', async () => {

@@ -11,7 +11,7 @@ import { MatListModule } from '@angular/material/list';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { Router } from '@angular/router';
-import type { FieldError, Organisation, PlanDetail, PlanEvaluation, PlanInputDraft, PlanVersion } from '@tunnelwright/contracts';
+import type { FieldError, InstalledBalance, Organisation, PlanDetail, PlanEvaluation, PlanInputDraft, PlanVersion } from '@tunnelwright/contracts';
 import { Subject, catchError, debounceTime, distinctUntilChanged, map, merge, of, startWith, switchMap } from 'rxjs';
 import { AuthService } from '../core/auth-service';
 import { CatalogueApi } from '../core/catalogue-api';
@@ -108,6 +108,9 @@ export class PlannerPage {
     return error ? problemMessage(error.cause ?? error, 'The balances could not be loaded.') : null;
   });
   private readonly balanceId = toSignal(this.form.controls.balanceId.valueChanges, { initialValue: this.form.controls.balanceId.value });
+  private readonly tunnelId = toSignal(this.form.controls.tunnelId.valueChanges, { initialValue: this.form.controls.tunnelId.value });
+  /** The balances the catalogue lists as installed in the chosen tunnel, whose drag capacity can be taken over. */
+  protected readonly tunnelBalances = computed(() => (this.tunnels.value() ?? []).find((tunnel) => tunnel.id === this.tunnelId())?.balances.filter((b) => (b.capacities[0] ?? 0) > 0) ?? []);
   /** The balance a customer's plan uses, as its evaluation names it. */
   protected readonly chosenBalanceName = computed(() => {
     if (!this.balanceId()) return null;
@@ -180,6 +183,12 @@ export class PlannerPage {
       ),
       startWith<EvaluationState>({ kind: 'loading' }),
     );
+  }
+
+  /** Takes the drag capacity (Fx) of a balance installed in the chosen tunnel into the typed field. */
+  protected useCapacity(balance: InstalledBalance): void {
+    this.form.controls.dragCapacity.setValue(balance.capacities[0] ?? null);
+    this.form.controls.dragCapacity.markAsDirty();
   }
 
   protected retry(): void {
