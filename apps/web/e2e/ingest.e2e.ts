@@ -38,6 +38,7 @@ describe('run files and reductions', () => {
 
     await page.getByRole('link', { name: 'Back to the test' }).click();
     await page.getByRole('link', { name: 'Run 1' }).click();
+    await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
     runUrl = page.url();
     const points = page.getByRole('table', { name: 'Reduced points' });
     await points.waitFor();
