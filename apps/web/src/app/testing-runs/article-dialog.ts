@@ -38,6 +38,7 @@ export interface ArticleDialogData {
     }
     .tw-form-grid {
       padding-top: 8px;
+      align-items: start;
     }
     .wide {
       grid-column: 1 / -1;
