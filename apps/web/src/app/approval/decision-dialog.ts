@@ -40,16 +40,10 @@ export interface DecisionDialogData {
     </mat-dialog-content>
     <mat-dialog-actions align="end">
       <button mat-button type="button" mat-dialog-close>Cancel</button>
-      <button mat-flat-button type="button" [class.destructive]="!approving" [disabled]="sending()" (click)="confirm()">
+      <button mat-flat-button type="button" [class.tw-destructive]="!approving" [disabled]="sending()" (click)="confirm()">
         {{ approving ? 'Approve' : 'Send back' }}
       </button>
     </mat-dialog-actions>
-  `,
-  styles: `
-    .destructive {
-      --mat-button-filled-container-color: var(--mat-sys-error);
-      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
-    }
   `,
 })
 export class DecisionDialog {

@@ -45,7 +45,7 @@ import { formatPeriod } from './lab-time';
     </mat-dialog-content>
     <mat-dialog-actions align="end">
       <button mat-button type="button" mat-dialog-close>Keep the booking</button>
-      <button mat-flat-button type="button" class="destructive" [disabled]="!preview.hasValue() || sending()" (click)="confirm()">
+      <button mat-flat-button type="button" class="tw-destructive" [disabled]="!preview.hasValue() || sending()" (click)="confirm()">
         Cancel booking
       </button>
     </mat-dialog-actions>
@@ -56,10 +56,6 @@ import { formatPeriod } from './lab-time';
     }
     .fee {
       font: var(--mat-sys-title-medium);
-    }
-    .destructive {
-      --mat-button-filled-container-color: var(--mat-sys-error);
-      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
     }
   `,
 })
