@@ -54,6 +54,8 @@ describe('run files and reductions', () => {
     await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Tests' }).click();
     await page.getByRole('link', { name: testTitle }).click();
     await page.getByRole('link', { name: 'Run 1' }).click();
+    // The router moves after the click resolves: wait for the run's address, then check it is the same run.
+    await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
     expect(page.url()).toBe(runUrl);
     await page.getByRole('table', { name: 'Reduced points' }).waitFor();
 
