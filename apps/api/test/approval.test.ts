@@ -50,6 +50,10 @@ describe('approval workflow and certified sheets', () => {
     rival = await f.user({ role: 'customer', organisationId: (await f.customerOrganisation()).id });
     const { User } = await import('@tunnelwright/db');
     world = await sampleReducedRun(f, undefined, await User.query().findById(technician.id));
+    // The day the lab logged the model in, which the sheet states.
+    const { TestArticle } = await import('@tunnelwright/db');
+    const test = await TestRecord.query().findById(world.testId).throwIfNotFound();
+    await TestArticle.query().findById(test.articleId).patch({ receivedOn: '2026-11-20' });
   });
   afterAll(() => t?.close());
 
@@ -235,7 +239,7 @@ describe('approval workflow and certified sheets', () => {
       const test = await TestRecord.query().findById(world.testId).withGraphFetched('[article, tunnel, balance]').throwIfNotFound();
       const organisation = await Organisation.query().findById(test.organisationId).throwIfNotFound();
       const stored = await ResultSheet.query().findById(first.id).throwIfNotFound();
-      const data = stored.data as { dates: { receipt: string; testDates: string[]; issue: string }; method: { correctionMethods: string[]; engineVersion: string } };
+      const data = stored.data as { dates: { receipt: string | null; testDates: string[]; issue: string }; method: { correctionMethods: string[]; engineVersion: string } };
       expect(text).toContain('CERTIFIED RESULT SHEET'); // (a) title
       expect(text).toContain(test.tunnel!.name); // (b) where the tests were done
       expect(text).toContain(organisation.name); // (d) customer
@@ -244,7 +248,8 @@ describe('approval workflow and certified sheets', () => {
       for (const line of data.method.correctionMethods) expect(text).toContain(line); // (e) corrections
       expect(text).toContain(data.method.engineVersion); // (e) engine version
       expect(data.dates.issue).toBe(stored.issueDate); // (i) issue date, and the receipt and test dates, in the lab's zone
-      for (const date of [data.dates.receipt, ...data.dates.testDates, data.dates.issue]) expect(text).toContain(formatDate(date));
+      expect(data.dates.receipt).toBe('2026-11-20'); // (h) the receipt date recorded on the article
+      for (const date of ['2026-11-20', ...data.dates.testDates, data.dates.issue]) expect(text).toContain(formatDate(date));
       expect(text).toContain(ITEMS_TESTED_STATEMENT); // (k)
       expect(text).toContain(REPRODUCTION_STATEMENT); // (o)
       expect(text).toMatch(/U \(coverage factor k = 2/); // (n) results with their expanded uncertainty

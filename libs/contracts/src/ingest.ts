@@ -22,6 +22,8 @@ export const articleInputSchema = z.object({
   description: text(2000).default(''),
   kind: articleKindSchema,
   conditionOnReceipt: text(2000).default(''),
+  /** Day the laboratory received the item; stated on certified sheets. Null while not recorded. */
+  receivedOn: date.nullable().default(null),
   /** Reference area S, m². */
   referenceArea: positive('Reference area'),
   referenceAreaKind: referenceAreaKindSchema,

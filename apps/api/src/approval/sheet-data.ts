@@ -211,7 +211,8 @@ export async function buildSheetData(trx: Knex.Transaction, submission: Submissi
   const customerSettings = (customer.settings ?? {}) as { addressLines?: string[] };
 
   const testDates = [...new Set(rawFiles.map((f) => dateInZone(f.createdAt, zone)))].sort();
-  const receipt = dateInZone(test.article!.createdAt, zone);
+  // The day the lab recorded as receipt; not the day the record was made, which can be later.
+  const receipt = test.article!.receivedOn ?? null;
   const right = await SigningRight.query(trx).where({ userId: identity.authorisedBy.id }).whereNull('revokedAt').first();
   const roleName = identity.authorisedBy.role === 'lab_manager' ? 'Laboratory manager' : 'Analyst';
   const article = test.article!;

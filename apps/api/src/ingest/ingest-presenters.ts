@@ -12,6 +12,7 @@ export function toArticle(a: TestArticle): Article {
     description: a.description,
     kind: a.kind,
     conditionOnReceipt: a.conditionOnReceipt,
+    receivedOn: a.receivedOn ?? null,
     referenceArea: a.referenceArea,
     referenceAreaKind: a.referenceAreaKind,
     referenceLength: a.referenceLength,

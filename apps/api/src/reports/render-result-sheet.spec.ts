@@ -69,8 +69,11 @@ describe('certified result sheet: ISO/IEC 17025:2017 §7.8.2.1', () => {
     expect(all).toContain(`Condition on receipt ${data.article.conditionOnReceipt}`);
   });
 
-  it('(h) gives the date of receipt of the item', () => {
-    expect(all).toContain(`Item received ${formatDate(data.dates.receipt)}`);
+  it('(h) gives the date of receipt of the item, and says so when the laboratory did not record it', async () => {
+    expect(data.dates.receipt).not.toBeNull();
+    expect(all).toContain(`Item received ${formatDate(data.dates.receipt!)}`);
+    const unrecorded = flat(pdfPageTexts(await renderResultSheet({ ...data, dates: { ...data.dates, receipt: null } })).join('\n'));
+    expect(unrecorded).toContain('Item received Date of receipt not recorded');
   });
 
   it('(i) gives the dates the tests were performed', () => {

@@ -356,7 +356,7 @@ export async function renderResultSheet(data: ResultSheetData): Promise<Buffer> 
   );
 
   section(doc, 3, 'Dates');
-  field(doc, 'Item received', formatDate(data.dates.receipt));
+  field(doc, 'Item received', data.dates.receipt === null ? 'Date of receipt not recorded' : formatDate(data.dates.receipt));
   field(doc, 'Tests performed', data.dates.testDates.map(formatDate).join(', '));
   field(doc, 'Sheet issued', formatDate(data.dates.issue));
 

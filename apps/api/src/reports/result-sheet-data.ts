@@ -133,7 +133,8 @@ export interface ResultSheetData {
     scale: number;
   };
   dates: {
-    receipt: string;
+    /** Day the item was received, `YYYY-MM-DD`; null when the laboratory did not record it. */
+    receipt: string | null;
     testDates: string[];
     issue: string;
   };

@@ -15,6 +15,8 @@ export class TestArticle extends BaseModel {
   description!: string;
   kind!: ArticleKind;
   conditionOnReceipt!: string;
+  /** Day the laboratory received the item (`YYYY-MM-DD`), if recorded. */
+  receivedOn!: string | null;
   referenceArea!: number;
   referenceAreaKind!: ReferenceAreaKind;
   referenceLength!: number;
@@ -26,6 +28,16 @@ export class TestArticle extends BaseModel {
   scale!: number;
 
   organisation?: Organisation;
+
+  /** pg turns a `date` into a Date at local midnight; keep the calendar date it names instead. */
+  override $parseDatabaseJson(json: Record<string, unknown>): Record<string, unknown> {
+    const parsed = super.$parseDatabaseJson(json);
+    const value = parsed['receivedOn'];
+    if (value instanceof Date) {
+      parsed['receivedOn'] = `${value.getFullYear()}-${String(value.getMonth() + 1).padStart(2, '0')}-${String(value.getDate()).padStart(2, '0')}`;
+    }
+    return parsed;
+  }
 
   static override relationMappings = (): RelationMappings => ({
     organisation: {

@@ -21,6 +21,7 @@ const saved: Article = {
   description: '',
   kind: 'road_vehicle',
   conditionOnReceipt: 'Front splitter cracked; glued before testing.',
+  receivedOn: null,
   referenceArea: 0.0884,
   referenceAreaKind: 'frontal',
   referenceLength: 0.82,
@@ -83,6 +84,7 @@ describe('ArticleDialog', () => {
     it('sends the article in SI units with its moment centre and closes with the answer', async () => {
       await (await input('Name'))?.setValue('Hatchback model, 1:5 (invented)');
       await (await input('Condition on receipt'))?.setValue('Front splitter cracked; glued before testing.');
+      await (await input('Received on'))?.setValue('2026-11-20');
       await (await input('Reference area (m²)'))?.setValue('0.0884');
       await (await input('Reference length (m)'))?.setValue('0.82');
       await (await input('Volume (m³)'))?.setValue('0.06');
@@ -97,6 +99,7 @@ describe('ArticleDialog', () => {
         kind: 'road_vehicle',
         description: '',
         conditionOnReceipt: 'Front splitter cracked; glued before testing.',
+        receivedOn: '2026-11-20',
         referenceArea: 0.0884,
         referenceAreaKind: 'frontal',
         referenceLength: 0.82,

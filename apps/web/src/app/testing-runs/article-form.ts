@@ -27,6 +27,8 @@ export type ArticleForm = FormGroup<{
   kind: FormControl<ArticleKind>;
   description: FormControl<string>;
   conditionOnReceipt: FormControl<string>;
+  /** `YYYY-MM-DD` from the date field; '' while not recorded. */
+  receivedOn: FormControl<string>;
   referenceArea: FormControl<number | null>;
   referenceAreaKind: FormControl<ReferenceAreaKind>;
   referenceLength: FormControl<number | null>;
@@ -47,6 +49,7 @@ export function buildArticleForm(fb: NonNullableFormBuilder, article: Article | 
     kind: fb.control<ArticleKind>(article?.kind ?? 'road_vehicle', Validators.required),
     description: fb.control(article?.description ?? '', Validators.maxLength(2000)),
     conditionOnReceipt: fb.control(article?.conditionOnReceipt ?? '', Validators.maxLength(2000)),
+    receivedOn: fb.control(article?.receivedOn ?? ''),
     referenceArea: new FormControl<number | null>(article?.referenceArea ?? null, positiveRequired),
     referenceAreaKind: fb.control<ReferenceAreaKind>(article?.referenceAreaKind ?? 'frontal', Validators.required),
     referenceLength: new FormControl<number | null>(article?.referenceLength ?? null, positiveRequired),
@@ -68,6 +71,7 @@ export function articleInputFrom(form: ArticleForm): ArticleInput {
     kind: value.kind,
     description: value.description.trim(),
     conditionOnReceipt: value.conditionOnReceipt.trim(),
+    receivedOn: value.receivedOn === '' ? null : value.receivedOn,
     referenceArea: value.referenceArea ?? 0,
     referenceAreaKind: value.referenceAreaKind,
     referenceLength: value.referenceLength ?? 0,

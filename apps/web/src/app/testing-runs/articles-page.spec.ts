@@ -23,6 +23,7 @@ function article(index: number, organisation: Organisation, name: string): Artic
     description: '',
     kind: index === 1 ? 'road_vehicle' : 'sports_equipment',
     conditionOnReceipt: '',
+    receivedOn: null,
     referenceArea: 0.0884,
     referenceAreaKind: 'frontal',
     referenceLength: 0.82,
