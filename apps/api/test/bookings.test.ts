@@ -281,6 +281,27 @@ describe('/api/bookings', () => {
       await waitForBookingMail(t.config.mailDir, customer.email, /Test completed/, { textIncludes: id });
     });
 
+    it('in test linking the test record: both point at each other; a test of another customer or tunnel is 400 on testId', async () => {
+      const { id, tunnelId } = await bookingIn('confirmed', ahead(52));
+      const { TestArticle, TestRecord } = await import('@tunnelwright/db');
+      const testOf = async (organisationId: string, tunnel: string) => {
+        const article = await TestArticle.query().insert({ organisationId, name: `Booked model ${fixtures.unique()}`, description: '', kind: 'other', conditionOnReceipt: '', referenceArea: 0.1, referenceAreaKind: 'frontal', referenceLength: 0.5, volume: 0, frontalArea: null, momentCentreX: 0, momentCentreY: 0, momentCentreZ: 0, scale: 1 });
+        return TestRecord.query().insert({ organisationId, articleId: article.id, tunnelId: tunnel, balanceId: null, bookingId: null, title: `Booked test ${fixtures.unique()}`, state: 'planned', configurations: [], reductionSettings: {}, createdBy: manager.id });
+      };
+      const rivalTest = await testOf(rival.organisationId, tunnelId);
+      const elsewhere = await testOf(customer.organisationId, await fixtures.tunnelId());
+      for (const wrong of [rivalTest, elsewhere]) {
+        const refused = await act(manager, id, 'start', { testId: wrong.id });
+        expect(refused.status).toBe(400);
+        expect(refused.body.errors).toEqual([{ field: 'testId', message: "Choose a test of this customer's in this tunnel" }]);
+      }
+      const own = await testOf(customer.organisationId, tunnelId);
+      const started = await act(manager, id, 'start', { testId: own.id });
+      expect(started.status, JSON.stringify(started.body)).toBe(200);
+      expect(started.body).toMatchObject({ state: 'in_test', testId: own.id });
+      expect((await TestRecord.query().findById(own.id))?.bookingId).toBe(id);
+    });
+
     it('decline with a reason → declined and the slot is free again', async () => {
       const start = ahead(48);
       const { id, tunnelId } = await bookingIn('requested', start);

@@ -104,6 +104,16 @@ describe('booking tunnel time', () => {
     await moved.waitFor();
     await moved.click();
     await moved.getByText(/booking\.ics \(text\/calendar/).waitFor();
+
+    // When the tunnel work starts, the lab manager links the customer's test record that will hold the runs.
+    await openSection(movePage, 'Bookings', 'Bookings');
+    await movePage.locator('tw-booking-summary').filter({ hasText: article }).getByRole('button', { name: 'Mark in test' }).click();
+    const start = movePage.getByRole('dialog');
+    await start.getByRole('combobox', { name: 'Test record for its runs' }).click();
+    await movePage.getByRole('option', { name: 'Estate car yaw sweep, baseline and mirrors off' }).click();
+    await start.getByRole('button', { name: 'Mark in test' }).click();
+    await movePage.getByText('Marked in test.').waitFor();
+    await movePage.locator('tw-booking-summary').filter({ hasText: article }).getByText('In test', { exact: true }).waitFor();
   });
 
   it('a customer attaches a saved plan, whose tunnel hours set the end, and a PNG drawing; the lab manager sees and downloads the drawing', async () => {

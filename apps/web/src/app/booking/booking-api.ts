@@ -65,8 +65,9 @@ export class BookingApi {
     return this.http.post<Booking>(`/api/bookings/${id}/technician`, { technicianId });
   }
 
-  start(id: string): Observable<Booking> {
-    return this.http.post<Booking>(`/api/bookings/${id}/start`, {});
+  /** Marks a confirmed booking in test, linking the test record that holds its runs when one is given. */
+  start(id: string, testId: string | null = null): Observable<Booking> {
+    return this.http.post<Booking>(`/api/bookings/${id}/start`, testId ? { testId } : {});
   }
 
   complete(id: string): Observable<Booking> {

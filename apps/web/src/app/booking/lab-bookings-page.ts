@@ -21,6 +21,7 @@ import { BookingApi } from './booking-api';
 import { BookingSummary } from './booking-summary';
 import { CancelBookingDialog } from './cancel-booking-dialog';
 import { PeriodChangeDialog, type PeriodChangeDialogData } from './period-change-dialog';
+import { StartBookingDialog } from './start-booking-dialog';
 import { QuoteEditor } from './quote-editor';
 
 const sections: readonly { title: string; states: readonly BookingState[] }[] = [
@@ -121,8 +122,9 @@ export class LabBookingsPage {
     this.run(booking, this.api.assignTechnician(booking.id, technicianId), technicianId ? 'Technician assigned.' : 'Technician unassigned.');
   }
 
+  /** Marks a confirmed booking in test, linking the test record that holds its runs if the lab manager picks one. */
   protected start(booking: Booking): void {
-    this.confirmThen({ title: 'Mark as in test?', message: `The test on ${booking.tunnelName} has started.`, confirmLabel: 'Mark in test' }, booking, this.api.start(booking.id), 'Marked in test.');
+    this.openThenReload(this.dialog.open(StartBookingDialog, { data: booking, width: '520px' }).afterClosed(), 'Marked in test.');
   }
 
   protected complete(booking: Booking): void {
