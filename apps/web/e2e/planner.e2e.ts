@@ -11,7 +11,7 @@ async function pickOption(page: Page, comboboxName: string, option: string): Pro
 describe('test planner', () => {
   const suite = useBrowserSuite();
 
-  it('a customer builds a three-part plan, sees the checks for a tunnel with the caution, and saves it', async () => {
+  it('a customer builds a three-part plan, sees the checks for a tunnel with the caution, saves it and attaches it to a booking request', async () => {
     const customer = demoUsers.find((person) => person.email === 'customer@quillfen.example');
     if (!customer) throw new Error('The demo seed has no Quillfen customer');
     const page = await suite.signedIn(customer.email);
@@ -42,6 +42,8 @@ describe('test planner', () => {
     await parts.nth(2).getByLabel('Drag area C_D·A per item (m²)').fill('0.05');
 
     await pickOption(page, 'Tunnel', 'Tunnel 1 — closed section · 2.9 m², up to 55 m/s');
+    // The catalogue lists the balance fitted in this tunnel; this plan checks against a smaller capacity typed in.
+    await page.getByRole('button', { name: /^Use SIX-COMPONENT 01, fitted in this tunnel: Fx \d+ N$/ }).waitFor();
     await page.getByLabel('Balance drag capacity (N)').fill('300');
 
     await page.getByRole('heading', { name: /Fit in Tunnel 1 — closed section: \d+ pass/ }).waitFor();
@@ -62,5 +64,24 @@ describe('test planner', () => {
     // Both versions are kept and listed, newest first.
     await page.getByRole('button', { name: 'Load version 1 into the editor' }).waitFor();
     await page.getByRole('button', { name: 'Load version 2 into the editor' }).waitFor();
+
+    // The plan goes with a booking request: its tunnel hours set the end of the period asked for.
+    await page.getByRole('link', { name: 'Use for a booking request' }).click();
+    await page.getByRole('heading', { name: 'Request tunnel time' }).waitFor();
+    await page.getByRole('combobox', { name: 'Saved test plan' }).getByText(name).waitFor();
+    await page.getByTestId('plan-duration').getByText(/2 h of tunnel time/).waitFor();
+    await page.getByRole('progressbar', { name: 'Loading tunnels' }).waitFor({ state: 'detached' });
+    await pickOption(page, 'Tunnel', 'Tunnel 1 — closed section');
+    const day = new Date(Date.now() + 120 * 86_400_000).toISOString().slice(0, 10);
+    await page.getByLabel('Start', { exact: true }).fill(`${day}T09:00`);
+    await expect.poll(() => page.getByLabel('End', { exact: true }).inputValue()).toBe(`${day}T11:00`);
+    const article = `Signal gantry model ${Date.now().toString(36)}`;
+    await page.getByLabel('Article name').fill(article);
+    await page.getByRole('combobox', { name: 'Coefficients based on' }).focus();
+    await page.keyboard.press('Enter');
+    await page.getByRole('option', { name: 'Frontal area', exact: true }).click();
+    await page.getByRole('button', { name: 'Send request' }).click();
+    await page.getByRole('heading', { name: 'My bookings', level: 1 }).waitFor();
+    await page.locator('tw-booking-summary').filter({ hasText: article }).getByText('Requested', { exact: true }).waitFor();
   });
 });
