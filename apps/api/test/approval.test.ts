@@ -127,7 +127,9 @@ describe('approval workflow and certified sheets', () => {
     it('a customer sees nothing of it: no submission, no points, no sheet', async () => {
       expect((await get(customer, `/api/submissions/${submissionId}`)).status).toBe(403);
       expect((await get(customer, `/api/tests/${world.testId}/submissions`)).status).toBe(403);
-      expect((await get(customer, `/api/reductions/${world.reductionId}/points`)).status).toBe(403);
+      // Before approval the reduction does not exist for the customer, whose test it is.
+      expect((await get(customer, `/api/reductions/${world.reductionId}/points`)).status).toBe(404);
+      expect((await get(customer, `/api/runs/${world.runId}/reductions`)).body).toEqual([]);
       expect((await get(customer, `/api/result-sheets?testId=${world.testId}`)).body).toEqual([]);
       expect((await get(customer, `/api/tests/${world.testId}`)).body.progress).toMatchObject({ customerStage: 'being_checked', approval: { state: 'awaiting_approval', sheetId: null } });
     });
@@ -163,6 +165,14 @@ describe('approval workflow and certified sheets', () => {
       expect((await post(secondAnalyst, `/api/submissions/${submissionId}/send-back`, { reason: 'Changed my mind entirely' })).status).toBe(409);
       const frozenExclusion = await request(t.app).put(`/api/reductions/${world.reductionId}/points/4/exclusion`).set(as(analyst)).send({ reason: 'Too late for this one' });
       expect(frozenExclusion.status).toBe(409);
+      // Approved, the customer sees their own run's points; a customer of another organisation still sees nothing.
+      const points = await get(customer, `/api/reductions/${world.reductionId}/points`);
+      expect(points.status).toBe(200);
+      expect(points.body.items.length).toBeGreaterThan(0);
+      expect(points.body.caution).toMatch(/not design loads/);
+      expect((await get(customer, `/api/runs/${world.runId}/reductions`)).body.map((r: { id: string }) => r.id)).toEqual([world.reductionId]);
+      expect((await get(rival, `/api/reductions/${world.reductionId}/points`)).status).toBe(404);
+      expect((await get(rival, `/api/runs/${world.runId}/reductions`)).status).toBe(404);
       expect((await request(t.app).delete(`/api/reductions/${world.reductionId}/points/3/exclusion`).set(as(analyst))).status).toBe(409);
     });
 

@@ -133,6 +133,14 @@ describe('certified result sheet', () => {
     await page.getByRole('heading', { name: 'Documents', level: 1 }).waitFor();
     await page.getByRole('row').filter({ hasText: reportNumber }).getByText('Valid').waitFor();
 
+    // Approved, the run's points are the customer's to see on their test too, with the caution.
+    await openTest(page);
+    const run = page.getByRole('table', { name: 'Runs' }).getByRole('row').filter({ hasText: 'Run 1' });
+    await run.getByText('Approved (v1)').waitFor();
+    await run.getByRole('cell').filter({ hasText: /^7$/ }).waitFor();
+    await run.locator('tw-cd-yaw-chart canvas').waitFor();
+    await page.getByRole('note').filter({ hasText: /not design loads/ }).first().waitFor();
+
     // Anyone holding the file checks it without signing in.
     const check = await suite.browser.freshPage();
     await check.goto(`${suite.api.baseUrl}/verify/${reportNumber}`);

@@ -1,8 +1,9 @@
 import { pointsQuerySchema } from '@tunnelwright/contracts';
 import { DESIGN_CAUTION } from '@tunnelwright/aero';
-import { Reduction, ReductionPoint } from '@tunnelwright/db';
+import { isStaff, Reduction, ReductionPoint, Run, scopeToCaller, TestRecord, type User } from '@tunnelwright/db';
 import { HttpError } from '../errors/http-error';
 import { toPoint, toReduction } from '../ingest/ingest-presenters';
+import { sampleSubmission } from './approval-samples';
 import { sampleReductionId } from './ingest-samples';
 import { route, type RouteDef } from './route';
 
@@ -19,7 +20,20 @@ async function findReduction(id: string): Promise<Reduction> {
   return reduction;
 }
 
-/** /api/reductions: one reduction version's state, progress, error location and points (staff only until approval exists). */
+/**
+ * The reduction as `caller` may see it: staff every one; a customer only approved ones of their own organisation's
+ * tests, so nothing before approval and nothing of another customer (404 either way).
+ */
+async function visibleReduction(caller: User, id: string): Promise<Reduction> {
+  const reduction = await findReduction(id);
+  if (isStaff(caller)) return reduction;
+  const run = await Run.query().select('testId').findById(reduction.runId);
+  const test = run ? await scopeToCaller(TestRecord.query(), caller).select('id').findById(run.testId) : undefined;
+  if (!reduction.approvedAt || !test) throw HttpError.notFound('The reduction');
+  return reduction;
+}
+
+/** /api/reductions: one reduction version's state, progress, error location and points; customers see approved ones of their own tests. */
 export const reductionRoutes: RouteDef[] = [
   route({
     method: 'get',
@@ -35,12 +49,12 @@ export const reductionRoutes: RouteDef[] = [
   route({
     method: 'get',
     path: '/:id/points',
-    access: staff,
-    summary: 'Reduced points in order (`offset`, `limit`, `full=true` for everything the engine reported)',
+    access: 'authenticated',
+    summary: 'Reduced points in order (`offset`, `limit`, `full=true` for everything the engine reported); customers: approved versions of their own tests',
     query: pointsQuerySchema,
-    sample: { params: async (f) => ({ id: await sampleReductionId(f) }), expect: 200 },
-    handler: async ({ params, query, res }) => {
-      const reduction = await findReduction(params.id ?? '');
+    sample: { params: async (f) => ({ id: (await sampleSubmission(f, 'approved')).reductionId }), expect: 200, crossOrganisation: true },
+    handler: async ({ caller, params, query, res }) => {
+      const reduction = await visibleReduction(caller, params.id ?? '');
       const base = ReductionPoint.query().where('reductionId', reduction.id);
       const total = await base.clone().resultSize();
       const builder = base.orderBy('index').offset(query.offset).limit(query.limit);

@@ -1,6 +1,6 @@
 import { compareQuerySchema, previewFieldsSchema, reductionOverridesSchema, uploadFieldsSchema } from '@tunnelwright/contracts';
 import { DESIGN_CAUTION, type ImportProfile } from '@tunnelwright/aero';
-import { RawFile, Reduction, ReductionPoint, Run, scopeToCaller, TestRecord } from '@tunnelwright/db';
+import { isStaff, RawFile, Reduction, ReductionPoint, Run, scopeToCaller, TestRecord } from '@tunnelwright/db';
 import { pipeline } from 'node:stream/promises';
 import { z } from 'zod';
 import { HttpError } from '../errors/http-error';
@@ -118,11 +118,16 @@ export const runRoutes: RouteDef[] = [
   route({
     method: 'get',
     path: '/:id/reductions',
-    access: staff,
-    summary: 'Every reduction version of the run, newest first',
-    sample: { params: async (f) => ({ id: await sampleComparedRunId(f) }), expect: 200 },
-    handler: async ({ params, res }) => {
-      const reductions = await Reduction.query().where('runId', params.id ?? '').orderBy('version', 'desc');
+    access: 'authenticated',
+    summary: 'Every reduction version of the run, newest first (customers: their own tests, approved versions only)',
+    sample: { params: async (f) => ({ id: await sampleComparedRunId(f) }), expect: 200, crossOrganisation: true },
+    handler: async ({ caller, params, res }) => {
+      const run = await Run.query().findById(params.id ?? '');
+      // A customer reaches only runs of their own organisation's tests; others' runs do not exist for them.
+      if (!run || !(await scopeToCaller(TestRecord.query(), caller).findById(run.testId))) throw HttpError.notFound('The run');
+      const builder = Reduction.query().where('runId', run.id).orderBy('version', 'desc');
+      if (!isStaff(caller)) builder.whereNotNull('approvedAt');
+      const reductions = await builder;
       res.json(await Promise.all(reductions.map(async (r) => toReduction(r, await pointCount(r.id)))));
     },
   }),

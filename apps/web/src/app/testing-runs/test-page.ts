@@ -62,17 +62,18 @@ export class TestPage {
   private readonly detailApi = inject(TestDetailApi);
   private readonly role = inject(AuthService).role;
 
-  /** Whether the caller is laboratory staff (customers see runs, not reductions, until approval). */
+  /** Whether the caller is laboratory staff (customers see a run's points only once a signatory approved them). */
   protected readonly isStaff = computed(() => this.role() !== 'customer' && this.role() !== null);
   protected readonly isLabManager = computed(() => this.role() === 'lab_manager');
   protected readonly isTechnician = computed(() => this.role() === 'technician' || this.role() === 'lab_manager');
   protected readonly test = rxResource({ params: () => this.id(), stream: ({ params }) => this.detailApi.test(params) });
+  /** Each run with its newest reduction: for staff any version, for customers the newest approved one (the API's rule). */
   protected readonly runs = rxResource({
-    params: () => ({ id: this.id(), staff: this.isStaff() }),
-    stream: ({ params }) => loadRunOverviews(this.api, params.id, params.staff),
+    params: () => this.id(),
+    stream: ({ params }) => loadRunOverviews(this.api, params, true),
   });
   protected readonly columns = computed(() =>
-    this.isStaff() ? ['runNumber', 'kind', 'configuration', 'state', 'points', 'warnings', 'chart'] : ['runNumber', 'kind', 'configuration', 'files'],
+    this.isStaff() ? ['runNumber', 'kind', 'configuration', 'state', 'points', 'warnings', 'chart'] : ['runNumber', 'kind', 'configuration', 'files', 'approved', 'points', 'chart'],
   );
   protected readonly title = computed(() => (this.test.hasValue() ? this.test.value().title : 'Test'));
   protected readonly testState = computed(() => {
