@@ -46,7 +46,7 @@ import { formatPeriod } from './lab-time';
         } @else {
           <p class="none" role="note">
             {{ booking.organisationName }} has no test in {{ booking.tunnelName }} to link yet.
-            <a routerLink="/tests/new" mat-dialog-close>Open a test</a> first to link it now, or start without one.
+            <a routerLink="/tests/new" [queryParams]="{ organisation: booking.organisationId, tunnel: booking.tunnelId }" mat-dialog-close>Open a test</a> first to link it now, or start without one.
           </p>
         }
       }

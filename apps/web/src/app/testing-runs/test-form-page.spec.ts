@@ -61,10 +61,12 @@ describe('TestFormPage', () => {
   /** The customers whose articles the page asked for, in order. */
   let articleQueries: (string | null)[];
 
-  async function start(id?: string): Promise<void> {
+  async function start(id?: string, query: { organisation?: string; tunnel?: string } = {}): Promise<void> {
     TestBed.configureTestingModule({ imports: [TestFormPage], providers: [provideRouter([]), provideHttpClient(), provideHttpClientTesting()] });
     fixture = TestBed.createComponent(TestFormPage);
     if (id) fixture.componentRef.setInput('id', id);
+    if (query.organisation) fixture.componentRef.setInput('organisation', query.organisation);
+    if (query.tunnel) fixture.componentRef.setInput('tunnel', query.tunnel);
     loader = TestbedHarnessEnvironment.documentRootLoader(fixture);
     backend = TestBed.inject(HttpTestingController);
     // The page asks for a customer's articles as soon as one is chosen; the harness waits for that answer.
@@ -103,6 +105,13 @@ describe('TestFormPage', () => {
     await articles?.open();
     await articles?.clickOptions({ text: article.name });
     expect(await articles?.getValueText()).toBe(article.name);
+  });
+
+  it('opened from a booking, starts with its customer and tunnel and offers that customer’s articles', async () => {
+    await start(undefined, { organisation: customer.id, tunnel: tunnel.id });
+    expect(await (await select('Customer organisation'))?.getValueText()).toBe(customer.name);
+    expect(await (await select('Tunnel'))?.getValueText()).toContain(tunnel.name);
+    expect(articleQueries).toEqual([customer.id]);
   });
 
   it('names what is missing, refuses a repeated configuration label and sends nothing', async () => {

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, ElementRef, computed, effect, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, computed, effect, inject, input, signal, untracked } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -85,6 +85,9 @@ import { TestSetupApi } from './test-setup-api';
 export class TestFormPage {
   /** Route parameter: the test being edited; absent when opening a new one. */
   readonly id = input<string>();
+  /** Query parameters a booking passes when its test is opened from it: the customer organisation and the tunnel. */
+  readonly organisation = input<string>();
+  readonly tunnel = input<string>();
 
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly fb = inject(NonNullableFormBuilder);
@@ -119,6 +122,16 @@ export class TestFormPage {
     effect(() => {
       const test = this.existing.value();
       if (test) fillTestForm(this.fb, this.form, test);
+    });
+    // A new test opened from a booking starts with the booking's customer and tunnel.
+    effect(() => {
+      const organisation = this.organisation();
+      const tunnel = this.tunnel();
+      if (this.id()) return;
+      untracked(() => {
+        if (organisation && this.form.controls.organisationId.value === '') this.form.controls.organisationId.setValue(organisation);
+        if (tunnel && this.form.controls.tunnelId.value === '') this.form.controls.tunnelId.setValue(tunnel);
+      });
     });
   }
 
