@@ -1,8 +1,6 @@
-import { Balance, BalanceCalibration, createKnex, Organisation, TestArticle, TestRecord, Tunnel, User } from '@tunnelwright/db';
 import { describe, expect, it } from 'vitest';
-import { demoCustomers } from '../../../scripts/seed/demo-users';
-import { databaseUrl } from './support/api-server';
 import { shots, useBrowserSuite } from './support/browser-suite';
+import { openDemoTest } from './support/demo-test';
 import { demoUser } from './support/sign-in';
 
 const suffix = Date.now().toString(36).toUpperCase();
@@ -13,48 +11,14 @@ const overdueBalance = `OB-${suffix}`;
 const linearRows = [0, 1, 2, 3, 4, 5].map((i) => [0, 1, 2, 3, 4, 5].map((j) => (i === j ? (0.002 + 0.0001 * i).toFixed(4) : '0')).join('\t'));
 
 /** A running test of the first demo customer on a balance whose only calibration was due in July 2025; its id. */
-async function openOverdueTest(): Promise<string> {
-  const knex = createKnex(databaseUrl);
-  try {
-    const customer = await Organisation.query(knex).findOne({ name: demoCustomers.quillfen });
-    const manager = await User.query(knex).findOne({ email: demoUser('lab_manager').email });
-    const tunnel = await Tunnel.query(knex).findOne({ kind: 'closed' });
-    if (!customer || !manager || !tunnel) throw new Error('The demo seed lacks the customer, lab manager or closed tunnel');
-    const article = await TestArticle.query(knex).insert({
-      organisationId: customer.id,
-      name: `Hatchback model ${suffix}, 1:4 (invented)`,
-      description: '',
-      kind: 'road_vehicle',
-      conditionOnReceipt: 'as new',
-      referenceArea: 0.14,
-      referenceAreaKind: 'frontal',
-      referenceLength: 0.7,
-      volume: 0.1,
-      frontalArea: null,
-      momentCentreX: 0,
-      momentCentreY: 0,
-      momentCentreZ: 0,
-      scale: 4,
-    });
-    const balance = await Balance.query(knex).insert({ identifier: overdueBalance, description: 'Invented balance past its calibration date', capacities: [400, 400, 1200, 120, 200, 120] });
-    const identity = [0, 1, 2, 3, 4, 5].map((i) => [0, 1, 2, 3, 4, 5].map((j) => (i === j ? 1 : 0)));
-    await BalanceCalibration.query(knex).insert({ balanceId: balance.id, version: 1, matrices: { linear: identity }, calibratedOn: '2025-01-10', dueOn: '2025-07-10', enteredBy: manager.id });
-    const test = await TestRecord.query(knex).insert({
-      organisationId: customer.id,
-      articleId: article.id,
-      tunnelId: tunnel.id,
-      balanceId: balance.id,
-      bookingId: null,
-      title: overdueTitle,
-      state: 'running',
-      configurations: [{ label: 'baseline', description: 'as delivered' }],
-      reductionSettings: {},
-      createdBy: manager.id,
-    });
-    return test.id;
-  } finally {
-    await knex.destroy();
-  }
+function openOverdueTest(): Promise<string> {
+  return openDemoTest({
+    title: overdueTitle,
+    articleName: `Hatchback model ${suffix}, 1:4 (invented)`,
+    balanceIdentifier: overdueBalance,
+    configuration: { label: 'baseline', description: 'as delivered' },
+    calibration: { calibratedOn: '2025-01-10', dueOn: '2025-07-10' },
+  });
 }
 
 describe('balances and calibrations', () => {

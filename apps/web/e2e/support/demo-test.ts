@@ -9,13 +9,15 @@ export interface DemoTestRecord {
   articleName: string;
   balanceIdentifier: string;
   configuration: { label: string; description: string };
+  /** The balance's only calibration; by default made in January 2026 and due far ahead, so uploads are reduced. */
+  calibration?: { calibratedOn: string; dueOn: string };
 }
 
 /**
  * Opens a running test of the first demo customer in the closed-section tunnel, for a 1:4 road-vehicle model, on a
- * new balance with an identity calibration due far ahead, so uploads are reduced without an override.
+ * new balance with an identity calibration (due far ahead unless `record.calibration` says otherwise); its id.
  */
-export async function openDemoTest(record: DemoTestRecord): Promise<void> {
+export async function openDemoTest(record: DemoTestRecord): Promise<string> {
   const knex = createKnex(databaseUrl);
   try {
     const customer = await Organisation.query(knex).findOne({ name: demoCustomers.quillfen });
@@ -40,8 +42,9 @@ export async function openDemoTest(record: DemoTestRecord): Promise<void> {
     });
     const balance = await Balance.query(knex).insert({ identifier: record.balanceIdentifier, description: 'Invented six-component balance', capacities: [400, 400, 1200, 120, 200, 120] });
     const identity = [0, 1, 2, 3, 4, 5].map((i) => [0, 1, 2, 3, 4, 5].map((j) => (i === j ? 1 : 0)));
-    await BalanceCalibration.query(knex).insert({ balanceId: balance.id, version: 1, matrices: { linear: identity }, calibratedOn: '2026-01-10', dueOn: '2099-01-10', enteredBy: manager.id });
-    await TestRecord.query(knex).insert({
+    const { calibratedOn, dueOn } = record.calibration ?? { calibratedOn: '2026-01-10', dueOn: '2099-01-10' };
+    await BalanceCalibration.query(knex).insert({ balanceId: balance.id, version: 1, matrices: { linear: identity }, calibratedOn, dueOn, enteredBy: manager.id });
+    const test = await TestRecord.query(knex).insert({
       organisationId: customer.id,
       articleId: article.id,
       tunnelId: tunnel.id,
@@ -53,6 +56,7 @@ export async function openDemoTest(record: DemoTestRecord): Promise<void> {
       reductionSettings: { minimumSamplesPerPoint: 2, corrections: { solidBlockage: 'frontal-area', wakeBlockage: 'none' } },
       createdBy: manager.id,
     });
+    return test.id;
   } finally {
     await knex.destroy();
   }
