@@ -24,7 +24,7 @@ import { TestSetupApi } from './test-setup-api';
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [DecimalPipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatProgressBarModule, MatSelectModule, MatTableModule, EmptyState, ErrorBanner],
   template: `
-    <div class="heading">
+    <div class="tw-page-header">
       <h1>Test articles</h1>
       <button mat-flat-button type="button" (click)="edit(null)" [disabled]="!customers.hasValue()"><mat-icon>add</mat-icon> Record a test article</button>
     </div>
@@ -91,15 +91,6 @@ import { TestSetupApi } from './test-setup-api';
     :host {
       display: block;
       padding: 16px 24px;
-    }
-    .heading {
-      display: flex;
-      align-items: center;
-      gap: 16px;
-      flex-wrap: wrap;
-    }
-    .heading h1 {
-      flex: 1 1 auto;
     }
     .filter {
       min-width: 280px;

@@ -33,15 +33,6 @@ import { TestDetailApi } from './test-detail-api';
       display: block;
       padding: 16px 24px;
     }
-    .heading {
-      display: flex;
-      align-items: center;
-      gap: 16px;
-      flex-wrap: wrap;
-    }
-    .heading h1 {
-      flex: 1 1 auto;
-    }
     table {
       width: 100%;
     }

@@ -20,7 +20,7 @@ import { testStateLabels } from './run-labels';
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [RouterLink, MatButtonModule, MatIconModule, MatListModule, MatProgressBarModule, EmptyState, ErrorBanner, SafetyNotice],
   template: `
-    <div class="heading">
+    <div class="tw-page-header">
       <h1>Tests</h1>
       @if (!isCustomer()) {
         <a mat-flat-button routerLink="/tests/new"><mat-icon>add</mat-icon> Open a test</a>
@@ -58,15 +58,6 @@ import { testStateLabels } from './run-labels';
     :host {
       display: block;
       padding: 16px 24px;
-    }
-    .heading {
-      display: flex;
-      align-items: center;
-      gap: 16px;
-      flex-wrap: wrap;
-    }
-    .heading h1 {
-      flex: 1 1 auto;
     }
     tw-safety-notice {
       display: block;
