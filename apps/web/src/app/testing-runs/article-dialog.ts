@@ -1,15 +1,12 @@
-import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
-import { MatButtonModule } from '@angular/material/button';
-import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MAT_DIALOG_DATA } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import type { Article, ArticleKind, Organisation, ReferenceAreaKind } from '@tunnelwright/contracts';
-import { problemFieldErrors, problemMessage } from '../core/problem-message';
-import { ErrorBanner } from '../shared/error-banner';
-import { focusFirstInvalid } from '../shared/focus-first-invalid';
+import { FormDialogLayout } from '../shared/form-dialog-layout';
+import { FormSubmission } from '../shared/form-submission';
 import { numberErrorText } from '../shared/number-error-text';
 import { articleControlName, articleInputFrom, articleKindLabels, buildArticleForm, referenceAreaKindLabels } from './article-form';
 import { TestSetupApi } from './test-setup-api';
@@ -29,7 +26,7 @@ export interface ArticleDialogData {
 @Component({
   selector: 'tw-article-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule, MatProgressBarModule, ErrorBanner],
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, FormDialogLayout],
   templateUrl: './article-dialog.html',
   styles: `
     .section {
@@ -46,9 +43,7 @@ export interface ArticleDialogData {
   `,
 })
 export class ArticleDialog {
-  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly api = inject(TestSetupApi);
-  private readonly dialogRef = inject<MatDialogRef<ArticleDialog, Article>>(MatDialogRef);
 
   protected readonly data = inject<ArticleDialogData>(MAT_DIALOG_DATA);
   protected readonly article = this.data.article;
@@ -56,37 +51,15 @@ export class ArticleDialog {
   protected readonly kinds = Object.entries(articleKindLabels) as [ArticleKind, string][];
   protected readonly areaKinds = Object.entries(referenceAreaKindLabels) as [ReferenceAreaKind, string][];
   protected readonly numberError = numberErrorText;
-  protected readonly busy = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly submission = new FormSubmission(this.form, { failure: 'The test article could not be saved.', controlPath: articleControlName });
 
   constructor() {
     if (this.data.organisationFixed) this.form.controls.organisationId.disable();
   }
 
   protected save(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      focusFirstInvalid(this.host.nativeElement);
-      return;
-    }
+    if (!this.submission.checkValid()) return;
     const input = articleInputFrom(this.form);
-    this.busy.set(true);
-    this.error.set(null);
-    const request = this.article ? this.api.updateArticle(this.article.id, input) : this.api.createArticle(input);
-    request.subscribe({
-      next: (saved) => {
-        this.busy.set(false);
-        this.dialogRef.close(saved);
-      },
-      error: (error: unknown) => {
-        this.busy.set(false);
-        for (const field of problemFieldErrors(error)) {
-          const control = this.form.get(articleControlName(field.field));
-          control?.setErrors({ server: field.message });
-          control?.markAsTouched();
-        }
-        this.error.set(problemMessage(error, 'The test article could not be saved.'));
-      },
-    });
+    this.submission.send(this.article ? this.api.updateArticle(this.article.id, input) : this.api.createArticle(input));
   }
 }

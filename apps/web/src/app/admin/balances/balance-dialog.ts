@@ -1,17 +1,14 @@
-import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { AbstractControl, FormArray, FormControl, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
-import { MatButtonModule } from '@angular/material/button';
-import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MAT_DIALOG_DATA } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import type { Balance, BalanceInput } from '@tunnelwright/contracts';
 import { CatalogueApi } from '../../core/catalogue-api';
-import { problemFieldErrors, problemMessage } from '../../core/problem-message';
-import { ErrorBanner } from '../../shared/error-banner';
-import { focusFirstInvalid } from '../../shared/focus-first-invalid';
+import { FormDialogLayout } from '../../shared/form-dialog-layout';
+import { FormSubmission } from '../../shared/form-submission';
 import { positiveNumber } from '../../shared/positive-number';
 import { BalancesApi } from './balances-api';
 import { loadComponents } from './calibration-matrix';
@@ -37,7 +34,7 @@ export function capacityError(control: AbstractControl, index: number): string {
 @Component({
   selector: 'tw-balance-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule, MatProgressBarModule, ErrorBanner],
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, FormDialogLayout],
   templateUrl: './balance-dialog.html',
   styles: `
     .tw-form-grid {
@@ -58,9 +55,7 @@ export function capacityError(control: AbstractControl, index: number): string {
   `,
 })
 export class BalanceDialog {
-  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly api = inject(BalancesApi);
-  private readonly dialogRef = inject<MatDialogRef<BalanceDialog, Balance>>(MatDialogRef);
 
   /** The balance being edited, or null for a new one. */
   protected readonly balance = inject<Balance | null>(MAT_DIALOG_DATA, { optional: true });
@@ -78,41 +73,13 @@ export class BalanceDialog {
   protected readonly tunnels = computed(() => (this.tunnelList.hasValue() ? this.tunnelList.value() : []));
   protected readonly capacityLabels = capacityLabels;
   protected readonly capacityError = capacityError;
-  protected readonly busy = signal(false);
-  protected readonly error = signal<string | null>(null);
-  /** The API's complaint about the capacities as a whole, e.g. that one is not above zero. */
-  protected readonly capacitiesError = signal<string | null>(null);
+  /** The API's complaints land on their fields; one about the capacities as a whole stays on the capacities array. */
+  protected readonly submission = new FormSubmission(this.form, { failure: 'The balance could not be saved.' });
 
   protected save(): void {
-    this.capacitiesError.set(null);
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      focusFirstInvalid(this.host.nativeElement);
-      return;
-    }
+    if (!this.submission.checkValid()) return;
     const value = this.form.getRawValue();
     const input: BalanceInput = { identifier: value.identifier.trim(), description: value.description.trim(), capacities: value.capacities.map((c) => c ?? 0), tunnelId: value.tunnelId };
-    this.busy.set(true);
-    this.error.set(null);
-    const request = this.balance ? this.api.updateBalance(this.balance.id, input) : this.api.createBalance(input);
-    request.subscribe({
-      next: (saved) => {
-        this.busy.set(false);
-        this.dialogRef.close(saved);
-      },
-      error: (error: unknown) => {
-        this.busy.set(false);
-        for (const field of problemFieldErrors(error)) {
-          if (field.field === 'capacities') {
-            this.capacitiesError.set(field.message);
-            continue;
-          }
-          const control = this.form.get(field.field);
-          control?.setErrors({ server: field.message });
-          control?.markAsTouched();
-        }
-        this.error.set(problemMessage(error, 'The balance could not be saved.'));
-      },
-    });
+    this.submission.send(this.balance ? this.api.updateBalance(this.balance.id, input) : this.api.createBalance(input));
   }
 }

@@ -9,8 +9,8 @@ import { CatalogueApi } from '../../core/catalogue-api';
 import { fromMinorUnits, toMinorUnits } from '../../shared/money';
 import { numberErrorText } from '../../shared/number-error-text';
 import { serviceUnitLabels } from '../../shared/service-unit-labels';
-import { FormDialogLayout } from '../shared/form-dialog-layout';
-import { FormSubmission } from '../shared/form-submission';
+import { FormDialogLayout } from '../../shared/form-dialog-layout';
+import { FormSubmission } from '../../shared/form-submission';
 import { NameField } from '../shared/name-field';
 
 /** What the service dialog needs: the service being edited (or null) and the tunnels it may be tied to. */

@@ -10,8 +10,8 @@ import type { Tunnel, TunnelKind } from '@tunnelwright/contracts';
 import { CatalogueApi } from '../../core/catalogue-api';
 import { numberErrorText } from '../../shared/number-error-text';
 import { tunnelKindLabels } from '../../shared/tunnel-kind-labels';
-import { FormDialogLayout } from '../shared/form-dialog-layout';
-import { FormSubmission } from '../shared/form-submission';
+import { FormDialogLayout } from '../../shared/form-dialog-layout';
+import { FormSubmission } from '../../shared/form-submission';
 import { NameField } from '../shared/name-field';
 import { buildTunnelForm, tunnelInputFrom } from './tunnel-form';
 

@@ -7,8 +7,8 @@ import { MatSelectModule } from '@angular/material/select';
 import { roleLabels, staffRoles, type Role } from '@tunnelwright/contracts';
 import { problemMessage } from '../../core/problem-message';
 import { ErrorBanner } from '../../shared/error-banner';
-import { FormDialogLayout } from '../shared/form-dialog-layout';
-import { FormSubmission } from '../shared/form-submission';
+import { FormDialogLayout } from '../../shared/form-dialog-layout';
+import { FormSubmission } from '../../shared/form-submission';
 import { UsersApi } from './users-api';
 
 /** Invites a person by e-mail; the role choices follow the kind of organisation chosen. Closes with the address. */

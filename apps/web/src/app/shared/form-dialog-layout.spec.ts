@@ -5,7 +5,7 @@ import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatDialogRef } from '@angular/material/dialog';
 import { MatProgressBarHarness } from '@angular/material/progress-bar/testing';
-import { ErrorBanner } from '../../shared/error-banner';
+import { ErrorBanner } from './error-banner';
 import { Subject, throwError } from 'rxjs';
 import { FormDialogLayout } from './form-dialog-layout';
 import { FormSubmission } from './form-submission';

@@ -2,11 +2,11 @@ import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialogModule } from '@angular/material/dialog';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { ErrorBanner } from '../../shared/error-banner';
+import { ErrorBanner } from './error-banner';
 import type { FormSubmission } from './form-submission';
 
 /**
- * The frame of a lab manager's dialog that sends one form: the title, a progress bar while working, the reason a
+ * The frame of a dialog that sends one form: the title, a progress bar while working, the reason a
  * send failed, the projected form, and Cancel beside the submit button, all following the dialog's `FormSubmission`.
  * The form itself, with the `id` given as `formId`, is the dialog's; a `tw-error-banner` it projects stands above the
  * send failure.

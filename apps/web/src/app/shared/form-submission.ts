@@ -2,8 +2,8 @@ import { ElementRef, inject, signal } from '@angular/core';
 import type { AbstractControl } from '@angular/forms';
 import { MatDialogRef } from '@angular/material/dialog';
 import type { Observable } from 'rxjs';
-import { problemFieldErrors, problemMessage } from '../../core/problem-message';
-import { focusFirstInvalid } from '../../shared/focus-first-invalid';
+import { problemFieldErrors, problemMessage } from '../core/problem-message';
+import { focusFirstInvalid } from './focus-first-invalid';
 
 /** How a dialog's form is sent. */
 export interface FormSubmissionOptions {
