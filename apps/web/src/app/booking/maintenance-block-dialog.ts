@@ -1,13 +1,12 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MAT_DIALOG_DATA, MatDialogModule } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import type { MaintenanceBlock } from '@tunnelwright/contracts';
-import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
+import { FormSubmission } from '../shared/form-submission';
 import { BookingApi } from './booking-api';
 import { CalendarLane, type FreeSlot } from './calendar-grid';
 import { localValueOf } from './lab-time';
@@ -54,20 +53,19 @@ export interface MaintenanceBlockDialogData {
       @if (orderError()) {
         <p class="error" role="alert">The end must be after the start.</p>
       }
-      @if (sendError(); as message) {
+      @if (submission.error(); as message) {
         <tw-error-banner [message]="message" [retryable]="false" />
       }
     </mat-dialog-content>
     <mat-dialog-actions align="end">
       <button mat-button type="button" mat-dialog-close>Close</button>
-      <button mat-flat-button type="button" [disabled]="sending()" (click)="save()">Block the tunnel</button>
+      <button mat-flat-button type="button" [disabled]="submission.sending()" (click)="save()">Block the tunnel</button>
     </mat-dialog-actions>
   `,
   styleUrl: './period-dialog.scss',
 })
 export class MaintenanceBlockDialog {
   private readonly api = inject(BookingApi);
-  private readonly dialogRef = inject<MatDialogRef<MaintenanceBlockDialog, MaintenanceBlock>>(MatDialogRef);
   protected readonly data = inject<MaintenanceBlockDialogData>(MAT_DIALOG_DATA);
 
   private readonly slot = this.data.slot;
@@ -77,25 +75,13 @@ export class MaintenanceBlockDialog {
     reason: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(2000)] }),
   });
   protected readonly orderError = signal(false);
-  protected readonly sending = signal(false);
-  protected readonly sendError = signal<string | null>(null);
+  protected readonly submission = new FormSubmission(this.form, { failure: 'The tunnel could not be blocked.' });
 
   protected save(): void {
     const { tunnelId, reason } = this.form.getRawValue();
     const { period, outOfOrder } = readPeriod(this.form.controls, this.data.timeZone);
     this.orderError.set(outOfOrder);
-    if (this.form.invalid || !tunnelId || !period || outOfOrder) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.sending.set(true);
-    this.sendError.set(null);
-    this.api.createMaintenanceBlock({ tunnelId, ...period, reason: reason.trim() }).subscribe({
-      next: (block) => this.dialogRef.close(block),
-      error: (error: unknown) => {
-        this.sending.set(false);
-        this.sendError.set(problemMessage(error, 'The tunnel could not be blocked.'));
-      },
-    });
+    if (!this.submission.checkValid() || !tunnelId || !period || outOfOrder) return;
+    this.submission.send(this.api.createMaintenanceBlock({ tunnelId, ...period, reason: reason.trim() }));
   }
 }

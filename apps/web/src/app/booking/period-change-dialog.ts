@@ -1,13 +1,13 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MAT_DIALOG_DATA, MatDialogModule } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import type { Booking, PeriodInput } from '@tunnelwright/contracts';
 import type { Observable } from 'rxjs';
-import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
+import { FormSubmission } from '../shared/form-submission';
 import { BookingApi } from './booking-api';
 import { formatPeriod, localValueOf } from './lab-time';
 import { PeriodFields, periodControls, readPeriod } from './period-fields';
@@ -60,20 +60,19 @@ const wording: Readonly<Record<PeriodChange, { title: string; current: string; a
       @if (orderError()) {
         <p class="error" role="alert">The end must be after the start.</p>
       }
-      @if (sendError(); as message) {
+      @if (submission.error(); as message) {
         <tw-error-banner [message]="message" [retryable]="false" />
       }
     </mat-dialog-content>
     <mat-dialog-actions align="end">
       <button mat-button type="button" mat-dialog-close>Close</button>
-      <button mat-flat-button type="button" [disabled]="sending()" (click)="send()">{{ words.action }}</button>
+      <button mat-flat-button type="button" [disabled]="submission.sending()" (click)="send()">{{ words.action }}</button>
     </mat-dialog-actions>
   `,
   styleUrl: './period-dialog.scss',
 })
 export class PeriodChangeDialog {
   private readonly api = inject(BookingApi);
-  private readonly dialogRef = inject<MatDialogRef<PeriodChangeDialog, Booking>>(MatDialogRef);
   private readonly data = inject<PeriodChangeDialogData>(MAT_DIALOG_DATA);
   protected readonly booking = this.data.booking;
   protected readonly words = wording[this.data.change];
@@ -84,25 +83,13 @@ export class PeriodChangeDialog {
     note: new FormControl('', { nonNullable: true, validators: Validators.maxLength(2000) }),
   });
   protected readonly orderError = signal(false);
-  protected readonly sending = signal(false);
-  protected readonly sendError = signal<string | null>(null);
+  protected readonly submission = new FormSubmission(this.form, { failure: this.words.failure });
 
   protected send(): void {
     const { period, outOfOrder } = readPeriod(this.form.controls, this.booking.timeZone);
     this.orderError.set(outOfOrder);
-    if (this.form.invalid || !period || outOfOrder) {
-      this.form.markAllAsTouched();
-      return;
-    }
-    this.sending.set(true);
-    this.sendError.set(null);
-    this.call(period, this.form.controls.note.value.trim()).subscribe({
-      next: (booking) => this.dialogRef.close(booking),
-      error: (error: unknown) => {
-        this.sending.set(false);
-        this.sendError.set(problemMessage(error, this.words.failure));
-      },
-    });
+    if (!this.submission.checkValid() || !period || outOfOrder) return;
+    this.submission.send(this.call(period, this.form.controls.note.value.trim()));
   }
 
   private call(period: PeriodInput, note: string): Observable<Booking> {
