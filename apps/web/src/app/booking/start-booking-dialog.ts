@@ -1,8 +1,8 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MAT_DIALOG_DATA, MatDialogModule } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
@@ -10,6 +10,7 @@ import { RouterLink } from '@angular/router';
 import type { Booking } from '@tunnelwright/contracts';
 import { problemMessage } from '../core/problem-message';
 import { ErrorBanner } from '../shared/error-banner';
+import { FormSubmission } from '../shared/form-submission';
 import { IngestApi } from '../testing-runs/ingest-api';
 import { BookingApi } from './booking-api';
 import { formatPeriod } from './lab-time';
@@ -50,13 +51,13 @@ import { formatPeriod } from './lab-time';
           </p>
         }
       }
-      @if (sendError(); as message) {
+      @if (submission.error(); as message) {
         <tw-error-banner [message]="message" [retryable]="false" />
       }
     </mat-dialog-content>
     <mat-dialog-actions align="end">
       <button mat-button type="button" mat-dialog-close>Cancel</button>
-      <button mat-flat-button type="button" [disabled]="sending() || tests.isLoading()" (click)="confirm()">Mark in test</button>
+      <button mat-flat-button type="button" [disabled]="submission.sending() || tests.isLoading()" (click)="confirm()">Mark in test</button>
     </mat-dialog-actions>
   `,
   styles: `
@@ -71,7 +72,6 @@ import { formatPeriod } from './lab-time';
 export class StartBookingDialog {
   private readonly api = inject(BookingApi);
   private readonly ingest = inject(IngestApi);
-  private readonly dialogRef = inject<MatDialogRef<StartBookingDialog, Booking>>(MatDialogRef);
   protected readonly booking = inject<Booking>(MAT_DIALOG_DATA);
 
   protected readonly period = formatPeriod(this.booking.period, this.booking.timeZone);
@@ -87,18 +87,9 @@ export class StartBookingDialog {
     const error = this.tests.error();
     return error ? problemMessage(error.cause ?? error, 'The customer’s tests could not be loaded.') : null;
   });
-  protected readonly sending = signal(false);
-  protected readonly sendError = signal<string | null>(null);
+  protected readonly submission = new FormSubmission(this.testId, { failure: 'The booking could not be marked in test.' });
 
   protected confirm(): void {
-    this.sending.set(true);
-    this.sendError.set(null);
-    this.api.start(this.booking.id, this.testId.value).subscribe({
-      next: (booking) => this.dialogRef.close(booking),
-      error: (error: unknown) => {
-        this.sending.set(false);
-        this.sendError.set(problemMessage(error, 'The booking could not be marked in test.'));
-      },
-    });
+    this.submission.send(this.api.start(this.booking.id, this.testId.value));
   }
 }
