@@ -7,6 +7,7 @@ import { MatSelectModule } from '@angular/material/select';
 import type { Article, ArticleKind, Organisation, ReferenceAreaKind } from '@tunnelwright/contracts';
 import { FormDialogLayout } from '../shared/form-dialog-layout';
 import { FormSubmission } from '../shared/form-submission';
+import { NameField } from '../shared/name-field';
 import { numberErrorText } from '../shared/number-error-text';
 import { articleControlName, articleInputFrom, articleKindLabels, buildArticleForm, referenceAreaKindLabels } from './article-form';
 import { TestSetupApi } from './test-setup-api';
@@ -26,7 +27,7 @@ export interface ArticleDialogData {
 @Component({
   selector: 'tw-article-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, FormDialogLayout],
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, FormDialogLayout, NameField],
   templateUrl: './article-dialog.html',
   styles: `
     .section {

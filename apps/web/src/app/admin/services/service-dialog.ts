@@ -11,7 +11,7 @@ import { numberErrorText } from '../../shared/number-error-text';
 import { serviceUnitLabels } from '../../shared/service-unit-labels';
 import { FormDialogLayout } from '../../shared/form-dialog-layout';
 import { FormSubmission } from '../../shared/form-submission';
-import { NameField } from '../shared/name-field';
+import { NameField } from '../../shared/name-field';
 
 /** What the service dialog needs: the service being edited (or null) and the tunnels it may be tied to. */
 export interface ServiceDialogData {

@@ -12,7 +12,7 @@ import { numberErrorText } from '../../shared/number-error-text';
 import { tunnelKindLabels } from '../../shared/tunnel-kind-labels';
 import { FormDialogLayout } from '../../shared/form-dialog-layout';
 import { FormSubmission } from '../../shared/form-submission';
-import { NameField } from '../shared/name-field';
+import { NameField } from '../../shared/name-field';
 import { buildTunnelForm, tunnelInputFrom } from './tunnel-form';
 
 /** Creates a tunnel, or edits the one passed in. Closes with the saved tunnel. */

@@ -3,7 +3,7 @@ import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 
-/** The Name box of a catalogue record's editor (tunnel, service), with what is wrong with the name. */
+/** The Name box of a record's editor (tunnel, service, test article), with what is wrong with the name. */
 @Component({
   selector: 'tw-name-field',
   changeDetection: ChangeDetectionStrategy.OnPush,
